@@ -1,0 +1,73 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { signIn } from "next-auth/react";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { signUpSchema, type SignUpInput } from "@/lib/accounts/schemas";
+import type { ErrorBody } from "@/lib/errors";
+import { Alert } from "@/components/ui/alert";
+import { TextField } from "@/components/ui/text-field";
+
+export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
+  const router = useRouter();
+  const [formError, setFormError] = useState<string>();
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema), defaultValues: { name: "", email: "", password: "" } });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(undefined);
+    let response: Response;
+    try {
+      response = await fetch("/api/signup", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(values) });
+    } catch {
+      setFormError("Could not reach Sixteenths. Check your connection and try again.");
+      return;
+    }
+    if (!response.ok) {
+      const body = (await response.json().catch(() => null)) as ErrorBody | null;
+      const fields = body?.error.fields ?? {};
+      for (const [name, message] of Object.entries(fields)) {
+        if (name === "name" || name === "email" || name === "password") setError(name, { message });
+      }
+      if (Object.keys(fields).length === 0) setFormError(body?.error.message ?? "Sign-up failed. Try again.");
+      return;
+    }
+    const result = await signIn("credentials", { email: values.email, password: values.password, redirect: false });
+    if (result?.error) {
+      router.replace("/signin");
+      return;
+    }
+    router.replace(callbackUrl);
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4">
+      {formError ? <Alert tone="error">{formError}</Alert> : null}
+      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
+      <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters. A short phrase is easier to remember than a jumble."
+        error={errors.password?.message}
+        {...register("password")}
+      />
+      <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
+        {isSubmitting ? "Creating your account…" : "Create account"}
+      </button>
+      <p className="text-sm text-ink-soft">
+        Already have an account? <Link href="/signin">Sign in</Link>. Enrolled in a class? Your instructor sends an invitation, or gives
+        you a join code to enter after you sign up.
+      </p>
+    </form>
+  );
+}

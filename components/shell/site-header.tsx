@@ -1,0 +1,50 @@
+import Link from "next/link";
+import { getCurrentUser } from "@/lib/auth/session";
+import { navFor } from "@/lib/navigation";
+import { NavLinks } from "./nav-links";
+import { TapeRule } from "./tape-rule";
+import { UserMenu } from "./user-menu";
+
+export async function SiteHeader() {
+  const user = await getCurrentUser();
+  const items = navFor(user?.role ?? null);
+  return (
+    <header data-chrome className="border-b border-rule bg-paper-raised">
+      <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2">
+        <Link href="/" className="flex min-h-touch items-center gap-2 text-ink no-underline">
+          <Logo />
+          <span className="text-xl font-bold tracking-tight">Sixteenths</span>
+        </Link>
+        <nav aria-label="Main" className="order-last -mx-2 w-full sm:order-none sm:mx-0 sm:w-auto sm:flex-1">
+          <NavLinks items={items} />
+        </nav>
+        <div className="ml-auto flex items-center gap-2">
+          {user ? (
+            <UserMenu user={user} />
+          ) : (
+            <>
+              <Link href="/signin" className="btn-quiet">
+                Sign in
+              </Link>
+              <Link href="/signup" className="btn-primary hidden sm:inline-flex">
+                Create account
+              </Link>
+            </>
+          )}
+        </div>
+      </div>
+      <TapeRule />
+    </header>
+  );
+}
+
+function Logo() {
+  // A square and a one-sixteenth tick: layout and precision.
+  return (
+    <svg aria-hidden="true" viewBox="0 0 32 32" className="size-8">
+      <rect x="1" y="1" width="30" height="30" rx="5" className="fill-chalk" />
+      <path d="M8 7v18h16" fill="none" stroke="white" strokeWidth="3" strokeLinecap="square" />
+      <path d="M13 25v-4M18 25v-6M23 25v-4" stroke="white" strokeWidth="1.6" />
+    </svg>
+  );
+}

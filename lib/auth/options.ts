@@ -1,0 +1,53 @@
+import type { NextAuthOptions } from "next-auth";
+import CredentialsProvider from "next-auth/providers/credentials";
+import { signInSchema } from "@/lib/accounts/schemas";
+import { verifyCredentials } from "@/lib/accounts/users";
+import { clientAddress, consume, reset } from "@/lib/auth/rate-limit";
+import { AppError } from "@/lib/errors";
+
+export const SESSION_MAX_AGE_SECONDS = 30 * 24 * 60 * 60;
+
+export const authOptions: NextAuthOptions = {
+  session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_SECONDS },
+  // next-auth reads NEXTAUTH_SECRET itself; lib/env validates it at the first request.
+  secret: process.env.NEXTAUTH_SECRET,
+  pages: { signIn: "/signin", error: "/signin" },
+  providers: [
+    CredentialsProvider({
+      name: "E-mail and password",
+      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      async authorize(credentials, req) {
+        const parsed = signInSchema.safeParse(credentials ?? {});
+        if (!parsed.success) return null;
+        const key = `${parsed.data.email}|${clientAddress(req?.headers)}`;
+        try {
+          await consume("signIn", key);
+        } catch (error) {
+          // next-auth passes a thrown message through to the sign-in page as `error`.
+          if (error instanceof AppError) throw new Error(error.message);
+          throw error;
+        }
+        const user = await verifyCredentials(parsed.data.email, parsed.data.password);
+        if (!user) return null;
+        await reset("signIn", key);
+        return { id: String(user.id), email: user.email, name: user.name, role: user.role };
+      },
+    }),
+  ],
+  callbacks: {
+    async jwt({ token, user }) {
+      if (user) {
+        token.uid = Number(user.id);
+        token.role = user.role;
+      }
+      return token;
+    },
+    async session({ session, token }) {
+      if (session.user) {
+        session.user.id = token.uid;
+        session.user.role = token.role;
+      }
+      return session;
+    },
+  },
+};

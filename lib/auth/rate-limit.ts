@@ -1,0 +1,33 @@
+import { RateLimiterMemory } from "rate-limiter-flexible";
+import { AppError } from "@/lib/errors";
+
+// In memory is enough for one server process; a second instance would need a shared store.
+const limiters = {
+  signIn: new RateLimiterMemory({ keyPrefix: "sign-in", points: 8, duration: 15 * 60 }),
+  // A school shop signs up a whole class from one address, so allow a class-sized burst.
+  signUp: new RateLimiterMemory({ keyPrefix: "sign-up", points: 40, duration: 60 * 60 }),
+};
+
+export type LimitName = keyof typeof limiters;
+
+/** Spends one point for `key`; throws a 429 AppError with the wait when none are left. */
+export async function consume(name: LimitName, key: string): Promise<void> {
+  try {
+    await limiters[name].consume(key);
+  } catch (rejection) {
+    if (rejection instanceof Error) throw rejection;
+    const wait = Math.ceil(((rejection as { msBeforeNext?: number }).msBeforeNext ?? 60_000) / 1000);
+    const minutes = Math.max(1, Math.ceil(wait / 60));
+    throw new AppError("rate_limited", `Too many tries. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`, undefined, wait);
+  }
+}
+
+/** Gives the points back after a success, so a user who finally gets the password right starts fresh. */
+export async function reset(name: LimitName, key: string): Promise<void> {
+  await limiters[name].delete(key);
+}
+
+export function clientAddress(headers: Headers | Record<string, unknown> | undefined): string {
+  const get = (k: string) => (headers instanceof Headers ? headers.get(k) : (headers?.[k] as string | undefined));
+  return get("x-forwarded-for")?.split(",")[0]?.trim() || get("x-real-ip") || "local";
+}

@@ -1,0 +1,40 @@
+import type { Sequelize } from "sequelize";
+import { ClassInstructor } from "./class-instructor";
+import { Enrollment } from "./enrollment";
+import { SchoolClass } from "./school-class";
+import { User } from "./user";
+
+export { ClassInstructor, Enrollment, SchoolClass, User };
+export type { Role } from "./user";
+export { ROLES } from "./user";
+
+export type Models = {
+  User: typeof User;
+  SchoolClass: typeof SchoolClass;
+  Enrollment: typeof Enrollment;
+  ClassInstructor: typeof ClassInstructor;
+};
+
+let initialisedFor: Sequelize | undefined;
+
+/** Binds the model classes to a connection; the schema itself comes from migrations, never sync(). */
+export function initModels(sequelize: Sequelize): Models {
+  if (initialisedFor !== sequelize) {
+    User.initModel(sequelize);
+    SchoolClass.initModel(sequelize);
+    Enrollment.initModel(sequelize);
+    ClassInstructor.initModel(sequelize);
+
+    SchoolClass.belongsTo(User, { as: "instructor", foreignKey: "instructorId" });
+    User.hasMany(SchoolClass, { as: "taughtClasses", foreignKey: "instructorId" });
+    Enrollment.belongsTo(SchoolClass, { as: "schoolClass", foreignKey: "classId" });
+    Enrollment.belongsTo(User, { as: "student", foreignKey: "studentId" });
+    SchoolClass.hasMany(Enrollment, { as: "enrollments", foreignKey: "classId" });
+    User.hasMany(Enrollment, { as: "enrollments", foreignKey: "studentId" });
+    ClassInstructor.belongsTo(SchoolClass, { as: "schoolClass", foreignKey: "classId" });
+    ClassInstructor.belongsTo(User, { as: "user", foreignKey: "userId" });
+    SchoolClass.hasMany(ClassInstructor, { as: "coInstructors", foreignKey: "classId" });
+    initialisedFor = sequelize;
+  }
+  return { User, SchoolClass, Enrollment, ClassInstructor };
+}

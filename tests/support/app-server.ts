@@ -1,0 +1,59 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import crypto from "node:crypto";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { prepareDatabase } from "@/lib/setup";
+import { freePort } from "./free-port";
+
+export type RunningApp = { url: string; databasePath: string; secret: string; stop: () => Promise<void> };
+
+// Test runners are started from the project root by the npm scripts.
+const root = process.cwd();
+
+/**
+ * Starts the built app (`next build` must have run) on a free loopback port with its
+ * own freshly migrated SQLite file in a temp folder — never the demo database.
+ */
+export async function startApp({ seed = true }: { seed?: boolean } = {}): Promise<RunningApp> {
+  if (!fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
+    throw new Error("No production build found: run `npm run build` first (npm test does it for you).");
+  }
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sixteenths-test-"));
+  const databasePath = path.join(dir, "test.sqlite");
+  await prepareDatabase(databasePath, { seed, bcryptCost: 10 });
+
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  const secret = crypto.randomBytes(32).toString("base64url");
+  const child: ChildProcess = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(port)], {
+    cwd: root,
+    env: { ...process.env, NODE_ENV: "production", DATABASE_PATH: databasePath, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: url, BCRYPT_COST: "10" },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  let output = "";
+  child.stdout?.on("data", (d) => (output += d));
+  child.stderr?.on("data", (d) => (output += d));
+
+  const stop = async () => {
+    if (child.exitCode === null) {
+      child.kill("SIGTERM");
+      await new Promise((resolve) => child.once("exit", resolve));
+    }
+    fs.rmSync(dir, { recursive: true, force: true });
+  };
+
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`The app exited during start-up:\n${output}`);
+    try {
+      const res = await fetch(`${url}/api/health`);
+      if (res.ok) return { url, databasePath, secret, stop };
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  await stop();
+  throw new Error(`The app did not answer /api/health within 30 s:\n${output}`);
+}
