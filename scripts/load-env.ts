@@ -1,4 +1,4 @@
-import nextEnv from "@next/env";
+import { loadEnvConfig } from "@next/env";
 
 // The same .env files, in the same order, as `next dev` / `next start` read them.
-nextEnv.loadEnvConfig(process.cwd(), process.env.NODE_ENV === "development");
+loadEnvConfig(process.cwd(), process.env.NODE_ENV === "development");

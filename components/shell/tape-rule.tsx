@@ -1,16 +1,20 @@
-// A strip of tape-measure graduations (inch, half, quarter, eighth, sixteenth) used as the
-// product's signature rule under the header. Decorative: hidden from screen readers.
-export function TapeRule({ inches = 24 }: { inches?: number }) {
-  const ticks: { x: number; h: number }[] = [];
-  for (let i = 0; i <= inches * 16; i++) {
-    const h = i % 16 === 0 ? 12 : i % 8 === 0 ? 9 : i % 4 === 0 ? 7 : i % 2 === 0 ? 5 : 3;
-    ticks.push({ x: i, h });
-  }
+// A strip of tape-measure graduations (inch, half, quarter, eighth, sixteenth) under the header:
+// the product's signature. A repeating pattern keeps the ticks the same size at any width.
+// Decorative, so hidden from screen readers.
+const STEP = 5; // px per sixteenth
+const heights = Array.from({ length: 16 }, (_, i) => (i === 0 ? 14 : i % 8 === 0 ? 10 : i % 4 === 0 ? 7 : i % 2 === 0 ? 5 : 3));
+
+export function TapeRule() {
   return (
-    <svg aria-hidden="true" focusable="false" className="block h-3 w-full text-ink-soft" viewBox={`0 0 ${inches * 16} 12`} preserveAspectRatio="xMinYMin slice">
-      {ticks.map((t) => (
-        <line key={t.x} x1={t.x + 0.5} x2={t.x + 0.5} y1={0} y2={t.h} stroke="currentColor" strokeWidth={t.h === 12 ? 0.6 : 0.35} />
-      ))}
+    <svg aria-hidden="true" focusable="false" className="block h-3.5 w-full text-ink-soft" height="14">
+      <defs>
+        <pattern id="tape-inch" width={STEP * 16} height="14" patternUnits="userSpaceOnUse">
+          {heights.map((h, i) => (
+            <line key={i} x1={i * STEP + 0.5} x2={i * STEP + 0.5} y1={0} y2={h} stroke="currentColor" strokeWidth={i === 0 ? 1.25 : 0.75} />
+          ))}
+        </pattern>
+      </defs>
+      <rect width="100%" height="14" fill="url(#tape-inch)" />
     </svg>
   );
 }

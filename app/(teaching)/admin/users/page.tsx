@@ -28,7 +28,7 @@ export default async function UsersPage({ searchParams }: PageProps<"/admin/user
               <th scope="col" className="px-4 py-2">
                 Name
               </th>
-              <th scope="col" className="px-4 py-2">
+              <th scope="col" className="hidden px-4 py-2 sm:table-cell">
                 E-mail
               </th>
               <th scope="col" className="px-4 py-2">
@@ -44,8 +44,9 @@ export default async function UsersPage({ searchParams }: PageProps<"/admin/user
               <tr key={u.id} className="border-b border-rule last:border-0">
                 <th scope="row" className="px-4 py-2 font-semibold">
                   {u.name}
+                  <span className="block text-xs font-normal break-all text-ink-soft sm:hidden">{u.email}</span>
                 </th>
-                <td className="px-4 py-2 break-all">{u.email}</td>
+                <td className="hidden px-4 py-2 break-all sm:table-cell">{u.email}</td>
                 <td className="px-4 py-2">{u.role}</td>
                 <td className="measure hidden px-4 py-2 sm:table-cell">{u.createdAt.slice(0, 10)}</td>
               </tr>

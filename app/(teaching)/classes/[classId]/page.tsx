@@ -76,7 +76,7 @@ export default async function RosterPage({ params, searchParams }: PageProps<"/c
                   <th scope="col" className="px-4 py-2">
                     Name
                   </th>
-                  <th scope="col" className="px-4 py-2">
+                  <th scope="col" className="hidden px-4 py-2 sm:table-cell">
                     E-mail
                   </th>
                   <th scope="col" className="px-4 py-2">
@@ -89,8 +89,9 @@ export default async function RosterPage({ params, searchParams }: PageProps<"/c
                   <tr key={r.studentId} className="border-b border-rule last:border-0">
                     <th scope="row" className="px-4 py-2 font-semibold">
                       {r.name}
+                      <span className="block text-xs font-normal break-all text-ink-soft sm:hidden">{r.email}</span>
                     </th>
-                    <td className="px-4 py-2 break-all">{r.email}</td>
+                    <td className="hidden px-4 py-2 break-all sm:table-cell">{r.email}</td>
                     <td className="px-4 py-2">
                       <span className={`rounded-sm px-2 py-0.5 text-xs font-semibold ${STATUS_STYLE[r.status]}`}>{r.status}</span>
                     </td>
