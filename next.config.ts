@@ -6,6 +6,8 @@ const nextConfig: NextConfig = {
   // Sequelize requires optional drivers (pg, mysql) that Turbopack would try to bundle.
   serverExternalPackages: ["sequelize", "sqlite3"],
   poweredByHeader: false,
+  // Lets two builds live side by side (e.g. parallel work on one checkout); tests start whichever is named.
+  distDir: process.env.NEXT_DIST_DIR ?? ".next",
   // forbidden() renders app/forbidden.tsx with a real 403 status.
   experimental: { authInterrupts: true },
 };

@@ -3,7 +3,7 @@ import { NextResponse, type NextRequest } from "next/server";
 
 // Areas that need an account. This is only the first, optimistic gate: every page,
 // action and route handler checks the user and role again on the server.
-const SIGNED_IN_AREAS = ["/classes", "/admin", "/my-classes"];
+const SIGNED_IN_AREAS = ["/classes", "/admin", "/my-classes", "/layouts"];
 
 export async function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;

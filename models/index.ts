@@ -1,10 +1,11 @@
 import type { Sequelize } from "sequelize";
 import { ClassInstructor } from "./class-instructor";
 import { Enrollment } from "./enrollment";
+import { SavedLayout } from "./saved-layout";
 import { SchoolClass } from "./school-class";
 import { User } from "./user";
 
-export { ClassInstructor, Enrollment, SchoolClass, User };
+export { ClassInstructor, Enrollment, SavedLayout, SchoolClass, User };
 export type { Role } from "./user";
 export { ROLES } from "./user";
 
@@ -13,6 +14,7 @@ export type Models = {
   SchoolClass: typeof SchoolClass;
   Enrollment: typeof Enrollment;
   ClassInstructor: typeof ClassInstructor;
+  SavedLayout: typeof SavedLayout;
 };
 
 let initialisedFor: Sequelize | undefined;
@@ -24,6 +26,7 @@ export function initModels(sequelize: Sequelize): Models {
     SchoolClass.initModel(sequelize);
     Enrollment.initModel(sequelize);
     ClassInstructor.initModel(sequelize);
+    SavedLayout.initModel(sequelize);
 
     SchoolClass.belongsTo(User, { as: "instructor", foreignKey: "instructorId" });
     User.hasMany(SchoolClass, { as: "taughtClasses", foreignKey: "instructorId" });
@@ -34,7 +37,8 @@ export function initModels(sequelize: Sequelize): Models {
     ClassInstructor.belongsTo(SchoolClass, { as: "schoolClass", foreignKey: "classId" });
     ClassInstructor.belongsTo(User, { as: "user", foreignKey: "userId" });
     SchoolClass.hasMany(ClassInstructor, { as: "coInstructors", foreignKey: "classId" });
+    SavedLayout.belongsTo(User, { as: "owner", foreignKey: "userId" });
     initialisedFor = sequelize;
   }
-  return { User, SchoolClass, Enrollment, ClassInstructor };
+  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout };
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { signOut } from "next-auth/react";
 import { useEffect, useRef } from "react";
 import type { SessionUser } from "@/lib/auth/roles";
@@ -49,7 +50,10 @@ export function UserMenu({ user }: { user: SessionUser }) {
         <p className="font-semibold">{user.name}</p>
         <p className="truncate text-sm text-ink-soft">{user.email}</p>
         <p className="mt-1 text-xs font-semibold uppercase tracking-wide text-ink-faint">{ROLE_LABEL[user.role]}</p>
-        <button type="button" className="btn-quiet mt-3 w-full" onClick={() => signOut({ callbackUrl: "/" })}>
+        <Link href="/layouts" className="btn-quiet mt-3 w-full">
+          My layouts
+        </Link>
+        <button type="button" className="btn-quiet mt-2 w-full" onClick={() => signOut({ callbackUrl: "/" })}>
           Sign out
         </button>
       </div>

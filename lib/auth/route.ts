@@ -8,8 +8,9 @@ import { AppError, errorBody, fieldErrorsFrom } from "@/lib/errors";
 import type { Role } from "@/models";
 
 export async function userFromRequest(req: Request): Promise<SessionUser | null> {
-  // getToken reads `req.cookies`, which only a NextRequest has.
-  const nextReq = req instanceof NextRequest ? req : new NextRequest(req);
+  // getToken reads `req.cookies`, which only a NextRequest has. Copy the headers only:
+  // wrapping the request itself would take its body away from the handler.
+  const nextReq = new NextRequest(req.url, { headers: req.headers });
   const token = await getToken({ req: nextReq, secret: env().NEXTAUTH_SECRET });
   return token?.uid ? findUserById(token.uid) : null;
 }

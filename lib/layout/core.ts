@@ -41,11 +41,12 @@ export type Rounded = { exact: Fraction; rounded: Fraction; error: Fraction };
  */
 export function roundTo(value: Fraction, denominator: number): Rounded {
   if (!Number.isInteger(denominator) || denominator < 1) throw new RangeError(`denominator must be a positive integer, got ${denominator}`);
-  const scaled = value.mul(denominator);
-  const magnitude = scaled.abs();
-  // floor(|x| + 1/2) is round-half-up on the magnitude, i.e. half away from zero overall.
-  const units = magnitude.add(new Fraction(1, 2)).floor();
-  const rounded = (value.s < 0n ? units.neg() : units).div(denominator);
+  // On the magnitude n/d: units = floor(n·den/d + 1/2) = floor((2·n·den + d) / (2·d)), i.e.
+  // round half up on the magnitude, which is half away from zero overall. Done in bigint
+  // because this runs for every mark of every layout.
+  const den = BigInt(denominator);
+  const units = (2n * value.n * den + value.d) / (2n * value.d);
+  const rounded = new Fraction(value.s < 0n ? -units : units, den);
   return { exact: value, rounded, error: rounded.sub(value) };
 }
 

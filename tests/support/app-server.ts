@@ -16,7 +16,7 @@ const root = process.cwd();
  * own freshly migrated SQLite file in a temp folder — never the demo database.
  */
 export async function startApp({ seed = true }: { seed?: boolean } = {}): Promise<RunningApp> {
-  if (!fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
+  if (!fs.existsSync(path.join(root, process.env.NEXT_DIST_DIR ?? ".next", "BUILD_ID"))) {
     throw new Error("No production build found: run `npm run build` first (npm test does it for you).");
   }
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sixteenths-test-"));

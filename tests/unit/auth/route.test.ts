@@ -64,6 +64,13 @@ describe("withAuth", () => {
     expect((await res.json()).user).toEqual({ id: instructorId, email: "i@example.com", name: "Inge Structor", role: "instructor" });
   });
 
+  it("leaves the request body for the handler to read", async () => {
+    const req = await requestAs(instructorId, "instructor");
+    const withBody = new Request(req.url, { method: "POST", headers: req.headers, body: JSON.stringify({ span: "96" }) });
+    const readsBody = withAuth(["instructor"], async (r) => Response.json(await r.json()));
+    expect(await (await readsBody(withBody, ctx)).json()).toEqual({ span: "96" });
+  });
+
   it("answers 401 for a token of a deleted account", async () => {
     const res = await echo(await requestAs(987654, "instructor"), ctx);
     expect(res.status).toBe(401);

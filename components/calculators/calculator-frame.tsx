@@ -1,0 +1,57 @@
+"use client";
+
+import type { ReactNode } from "react";
+import { CopyLinkButton, PrintButton } from "./toolbar-buttons";
+import { SaveLayoutButton } from "./save-layout-button";
+import type { CalculatorKind } from "@/lib/calculators";
+
+type Props = {
+  kind: CalculatorKind;
+  title: string;
+  /** The inputs (a form). */
+  inputs: ReactNode;
+  /** Results, drawing and tables; shown on screen and on the printed shop sheet. */
+  results: ReactNode;
+  /** The current query string, for copy-link and save. */
+  query: string;
+  compact?: boolean;
+  signedIn?: boolean;
+  /** A one-line summary of the inputs printed at the top of the shop sheet. */
+  sheetSummary: string;
+};
+
+/**
+ * The common frame of every calculator: inputs beside results on a desktop, stacked on a
+ * phone; a toolbar (copy link, print shop sheet, save) on the standalone page. Printing
+ * hides the inputs and prints the results as a one-page shop sheet.
+ */
+export function CalculatorFrame({ kind, title, inputs, results, query, compact = false, signedIn = false, sheetSummary }: Props) {
+  return (
+    <section aria-label={`${title} calculator`} className={compact ? "card my-6 space-y-4 p-4" : "space-y-4"} data-calculator={kind}>
+      <div className="hidden print:block">
+        <p className="text-xs uppercase tracking-wide">Sixteenths shop sheet · {title}</p>
+        <p className="measure text-sm">{sheetSummary}</p>
+      </div>
+      {compact ? null : (
+        <div data-chrome className="flex flex-wrap gap-2">
+          <CopyLinkButton query={query} />
+          <PrintButton />
+          <SaveLayoutButton kind={kind} query={query} signedIn={signedIn} />
+        </div>
+      )}
+      <div className={compact ? "grid gap-4 md:grid-cols-[minmax(0,18rem)_1fr]" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr]"}>
+        <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} className="space-y-3" aria-label={`${title} inputs`}>
+          {inputs}
+        </form>
+        <div className="min-w-0 space-y-4" aria-live="polite">
+          {results}
+        </div>
+      </div>
+      {compact ? (
+        <p data-chrome className="text-sm">
+          <a href={`/calculators/${kind}?${query}`}>Open this in the full {title.toLowerCase()} calculator</a>
+        </p>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,51 @@
+"use client";
+
+import { useId, type InputHTMLAttributes } from "react";
+import type { UseFormRegisterReturn } from "react-hook-form";
+import { formatMeasure, parseMeasure } from "@/lib/layout/measure";
+import type { Unit } from "@/lib/layout/core";
+
+type Props = {
+  label: string;
+  registration: UseFormRegisterReturn;
+  value: string;
+  unit: Unit;
+  denominator: number;
+  /** The schema's message for this field, when it rejected the value for another reason (a rule, not the notation). */
+  error?: string;
+  hint?: string;
+} & Omit<InputHTMLAttributes<HTMLInputElement>, "value">;
+
+/**
+ * A length field that accepts tape notation and says what it read (`reads as 1' 10 3/4"`),
+ * or what it could not read, as the user types.
+ */
+export function MeasureField({ label, registration, value, unit, denominator, error, hint, className, ...rest }: Props) {
+  const id = useId();
+  const parsed = value.trim() === "" ? null : parseMeasure(value, unit);
+  const problem = parsed && !parsed.ok ? parsed.error.message : value.trim() === "" ? "Enter a length." : error;
+  const reading =
+    parsed && parsed.ok ? formatMeasure(parsed.value, { unit, denominator: Math.max(denominator, 64), style: unit === "in" ? "feet-inches" : undefined, mmDecimals: 1 }).text : null;
+  return (
+    <div className={className}>
+      <label htmlFor={id} className="mb-1 block text-sm font-semibold">
+        {label}
+      </label>
+      <input
+        id={id}
+        type="text"
+        inputMode="text"
+        autoComplete="off"
+        spellCheck={false}
+        className="input measure"
+        aria-invalid={problem ? true : undefined}
+        aria-describedby={`${id}-reading`}
+        {...registration}
+        {...rest}
+      />
+      <p id={`${id}-reading`} aria-live="polite" className={`mt-1 min-h-5 text-xs ${problem ? "font-semibold text-danger" : "text-ink-soft"}`}>
+        {problem ? problem : reading ? <>reads as <span className="measure">{reading}</span></> : hint}
+      </p>
+    </div>
+  );
+}
