@@ -33,11 +33,11 @@ export default async function HomePage() {
             </div>
           ) : (
             <div className="flex flex-wrap gap-3">
-              <Link href="/signup" className="btn-primary">
-                Create a free account
+              <Link href="/calculators" className="btn-primary">
+                Open the calculators
               </Link>
-              <Link href="/signin" className="btn-quiet">
-                Sign in
+              <Link href="/signup" className="btn-quiet">
+                Create a free account
               </Link>
             </div>
           )}

@@ -31,7 +31,7 @@ export function MarksTable({ members, display, memberName = "Member" }: { member
               </th>
             </tr>
           </thead>
-          <tbody className="measure">
+          <tbody className="measure whitespace-nowrap">
             {shown.map((m) => (
               <tr key={m.index} className="border-b border-rule last:border-0">
                 <th scope="row" className="px-3 py-1.5">

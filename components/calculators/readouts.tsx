@@ -43,7 +43,7 @@ export function Readout({ label, value, display, style, note }: { label: string;
   return (
     <div className="rounded border border-rule bg-paper-raised p-3">
       <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{label}</dt>
-      <dd className="measure text-xl font-bold">{lengthText(value, display, style)}</dd>
+      <dd className="measure text-lg font-bold whitespace-nowrap sm:text-xl">{lengthText(value, display, style)}</dd>
       <dd className="measure text-xs text-ink-soft">
         exact {exact} · {error}
       </dd>
@@ -56,7 +56,7 @@ export function CountReadout({ label, value, note }: { label: string; value: num
   return (
     <div className="rounded border border-rule bg-paper-raised p-3">
       <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{label}</dt>
-      <dd className="measure text-xl font-bold">{value}</dd>
+      <dd className="measure text-lg font-bold whitespace-nowrap sm:text-xl">{value}</dd>
       {note ? <dd className="mt-1 text-xs text-ink-soft">{note}</dd> : null}
     </div>
   );
