@@ -1,7 +1,70 @@
 // The exact search for short cut lists. Sizes are the scaled integers of
 // cut-list-heuristic.ts (piece + one kerf; capacity = usable length + one kerf), sorted
 // longest first.
-import { compareScores, scorePacking, type Packing, type Score, type ScoreBound, type StockChooser, type StockOption } from "./cut-list-heuristic";
+import { compareScores, scorePacking, type Packing, type Score, type StockChooser, type StockOption } from "./cut-list-heuristic";
+
+/**
+ * Martello and Toth's L2 bound on the number of boards of one capacity: pieces over half a
+ * board each need their own board, and the small pieces must overflow the room those boards
+ * leave. Any mix of stock lengths needs at least as many boards as the longest stock alone.
+ * `sizes` must be sorted descending and none may exceed `capacity`.
+ */
+export function lowerBoundL2(sizes: readonly number[], capacity: number): number {
+  const n = sizes.length;
+  if (n === 0) return 0;
+  const ascending = [...sizes].reverse();
+  const prefix = [0];
+  for (const size of ascending) prefix.push(prefix[prefix.length - 1] + size);
+  // First index whose size exceeds `value` (sizes are integers).
+  const countAtMost = (value: number) => {
+    let lo = 0;
+    let hi = n;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (ascending[mid] <= value) lo = mid + 1;
+      else hi = mid;
+    }
+    return lo;
+  };
+  const half = Math.floor(capacity / 2);
+  const overHalf = countAtMost(half);
+  let bound = Math.ceil(prefix[n] / capacity);
+  const thresholds = new Set<number>([0]);
+  for (let i = 0; i < overHalf; i++) thresholds.add(ascending[i]);
+  for (const alpha of thresholds) {
+    const big = countAtMost(capacity - alpha); // sizes above capacity − α start here
+    const small = countAtMost(alpha - 1); // sizes of at least α start here
+    const mediumCount = big - overHalf;
+    const roomInMedium = mediumCount * capacity - (prefix[big] - prefix[overHalf]);
+    const smallSum = prefix[overHalf] - prefix[small];
+    const overflow = Math.max(0, Math.ceil((smallSum - roomInMedium) / capacity));
+    bound = Math.max(bound, n - big + mediumCount + overflow);
+  }
+  return bound;
+}
+
+/**
+ * The best score any plan could have, so a plan that reaches it is proven best:
+ * - boards: the L2 bound `boardsAtLeast`;
+ * - cost: each board at least the cheapest stock, and the whole plan at least the lowest
+ *   cost per unit of capacity times all the pieces;
+ * - length: each board at least the shortest stock, and the boards' capacities must hold
+ *   all the pieces (stock length − capacity is the same trim − kerf for every stock).
+ */
+export function bestPossible(chooser: StockChooser, boardsAtLeast: number, totalSize: number): Score {
+  const options = chooser.byCapacity;
+  const count = boardsAtLeast;
+  // In bigint: cost × total size can pass 2^53.
+  const costFloor = options.reduce((floor, option) => {
+    const least = (BigInt(option.cost) * BigInt(totalSize) + BigInt(option.capacity) - 1n) / BigInt(option.capacity);
+    return Math.min(floor, Number(least));
+  }, Infinity);
+  const shortest = options.reduce((a, b) => (b.length < a.length ? b : a));
+  const over = options[0].length - options[0].capacity;
+  const sameOver = options.every((option) => option.length - option.capacity === over);
+  const holdsAll = sameOver ? Math.max(count * shortest.capacity, totalSize) + count * over : 0;
+  return { count, cost: Math.max(count * chooser.cheapest.cost, costFloor), length: Math.max(count * shortest.length, holdsAll) };
+}
 
 export type ExactResult = { packing: Packing; score: Score; complete: boolean };
 
@@ -156,10 +219,9 @@ const MIX_LIMIT = 5000;
  * within `nodeBudget` placements, in which case the plan is optimal. `incumbent` is the
  * heuristic's plan, kept when nothing beats it.
  */
-export function exactPacking(sizes: readonly number[], chooser: StockChooser, incumbent: Packing, bound: ScoreBound, nodeBudget: number): ExactResult {
+export function exactPacking(sizes: readonly number[], chooser: StockChooser, incumbent: Packing, root: Score, nodeBudget: number): ExactResult {
   let packing = incumbent;
   let score = scorePacking(incumbent, sizes, chooser);
-  const root = bound.root;
   if (sizes.length === 0 || compareScores(score, root) <= 0) return { packing, score, complete: true };
   const budget: Budget = { nodes: nodeBudget };
 
@@ -191,47 +253,3 @@ export function exactPacking(sizes: readonly number[], chooser: StockChooser, in
   return { packing, score, complete: true };
 }
 
-/**
- * Improve a long list's plan a few boards at a time: pool the pieces of the boards with the
- * most room left (enough room between them for a whole board) and some others picked at
- * random, and ask the exact placer to cut them from one board fewer. Seeded, so the same
- * list always gives the same plan. Stops at `lowerBound` or when the work budget is spent.
- */
-export function repackFewer(packing: Packing, sizes: readonly number[], capacity: number, lowerBound: number, work: number, tries: number): Packing {
-  let boards = packing.filter((board) => board.length > 0).map((board) => [...board]);
-  const budget: Budget = { nodes: work };
-  let seed = 0x5eed;
-  const random = (below: number) => {
-    seed = (Math.imul(seed, 1103515245) + 12345) >>> 0;
-    return (seed >>> 8) % below;
-  };
-  const loadOf = (board: number[]) => board.reduce((total, item) => total + sizes[item], 0);
-  let failures = 0;
-  while (boards.length > lowerBound && budget.nodes > 0 && failures < tries) {
-    const order = boards.map((board, b) => ({ b, room: capacity - loadOf(board) })).sort((x, y) => y.room - x.room || x.b - y.b);
-    if (order.reduce((total, entry) => total + entry.room, 0) < capacity) break;
-    const chosen = new Set<number>();
-    let room = 0;
-    for (const entry of order) {
-      if (room >= capacity) break;
-      // Skip some of the roomiest boards now and then, so each try pools a different set.
-      if (failures > 0 && random(4) === 0) continue;
-      chosen.add(entry.b);
-      room += entry.room;
-    }
-    if (room < capacity) continue;
-    const others = 2 + (failures % 6);
-    for (let k = 0; k < others && chosen.size < boards.length; k++) chosen.add(order[random(order.length)].b);
-    const pooled = [...chosen].flatMap((b) => boards[b]).sort((x, y) => sizes[y] - sizes[x] || x - y);
-    const trial: Budget = { nodes: Math.min(budget.nodes, 20_000) };
-    const found = place(pooled.map((item) => sizes[item]), new Array<number>(chosen.size - 1).fill(capacity), trial);
-    budget.nodes -= Math.min(budget.nodes, 20_000) - Math.max(trial.nodes, 0);
-    if (!found) {
-      failures += 1;
-      continue;
-    }
-    failures = 0;
-    boards = [...boards.filter((_, b) => !chosen.has(b)), ...found.map((board) => board.map((at) => pooled[at]))];
-  }
-  return boards;
-}

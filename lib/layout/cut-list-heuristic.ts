@@ -19,8 +19,8 @@ export function compareScores(a: Score, b: Score): number {
 
 /**
  * For a board load, the stock to cut it from: the cheapest board that holds it, and among
- * equally cheap ones the shortest (least waste). A heavier load can only rule stock out,
- * so the choice never gets better as a board fills — the exact search's bound relies on it.
+ * equally cheap ones the shortest (least waste). Any plan can cut each board from this
+ * stock without getting worse, so the searches only choose which pieces share a board.
  */
 export class StockChooser {
   readonly capacity: number;
@@ -75,113 +75,6 @@ export function scorePacking(packing: Packing, sizes: readonly number[], chooser
     score.length += option.length;
   }
   return score;
-}
-
-/**
- * Martello and Toth's L2 bound on the number of boards of one capacity: pieces over half a
- * board each need their own board, and the small pieces must overflow the room those boards
- * leave. Any mix of stock lengths needs at least as many boards as the longest stock alone.
- * `sizes` must be sorted descending and none may exceed `capacity`.
- */
-export function lowerBoundL2(sizes: readonly number[], capacity: number): number {
-  const n = sizes.length;
-  if (n === 0) return 0;
-  const ascending = [...sizes].reverse();
-  const prefix = [0];
-  for (const size of ascending) prefix.push(prefix[prefix.length - 1] + size);
-  // First index whose size exceeds `value` (sizes are integers).
-  const countAtMost = (value: number) => {
-    let lo = 0;
-    let hi = n;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (ascending[mid] <= value) lo = mid + 1;
-      else hi = mid;
-    }
-    return lo;
-  };
-  const half = Math.floor(capacity / 2);
-  const overHalf = countAtMost(half);
-  let bound = Math.ceil(prefix[n] / capacity);
-  const thresholds = new Set<number>([0]);
-  for (let i = 0; i < overHalf; i++) thresholds.add(ascending[i]);
-  for (const alpha of thresholds) {
-    const big = countAtMost(capacity - alpha); // sizes above capacity − α start here
-    const small = countAtMost(alpha - 1); // sizes of at least α start here
-    const mediumCount = big - overHalf;
-    const roomInMedium = mediumCount * capacity - (prefix[big] - prefix[overHalf]);
-    const smallSum = prefix[overHalf] - prefix[small];
-    const overflow = Math.max(0, Math.ceil((smallSum - roomInMedium) / capacity));
-    bound = Math.max(bound, n - big + mediumCount + overflow);
-  }
-  return bound;
-}
-
-/**
- * A lower bound on the score of any plan that completes a partial one, used to prune the
- * exact search and, with no boards open, to tell whether a plan is proven best.
- * - Boards: the open ones plus enough new ones for what does not fit in their room, and
- *   never fewer than the L2 bound.
- * - Cost: each open board at least what its stock costs now (a heavier load never makes the
- *   choice cheaper), each new board at least the cheapest stock; and the whole plan at
- *   least the lowest cost per unit of capacity times all the pieces.
- * - Length: an open board keeps at least its present stock and grows by whatever it takes
- *   past that stock's room; a new board is at least the shortest stock and at least what
- *   it holds. (Stock length − capacity is the same trim − kerf for every stock.)
- */
-export class ScoreBound {
-  private readonly costFloor: number;
-  private readonly shortest: StockOption;
-  private readonly lengthOverCapacity: number | null;
-
-  constructor(
-    private readonly chooser: StockChooser,
-    private readonly boardsAtLeast: number,
-    private readonly totalSize: number,
-  ) {
-    const options = chooser.byCapacity;
-    this.shortest = options.reduce((a, b) => (b.length < a.length ? b : a));
-    const over = options[0].length - options[0].capacity;
-    this.lengthOverCapacity = options.every((option) => option.length - option.capacity === over) ? over : null;
-    // In bigint: cost × total size can pass 2^53.
-    this.costFloor = options.reduce((floor, option) => {
-      const rate = (BigInt(option.cost) * BigInt(totalSize) + BigInt(option.capacity) - 1n) / BigInt(option.capacity);
-      return Math.min(floor, Number(rate));
-    }, Infinity);
-  }
-
-  /** `loads` of the open boards, `rest` the total size still to place, `smallest` its smallest piece. */
-  at(loads: readonly number[], rest: number, smallest: number): Score {
-    const capacity = this.chooser.capacity;
-    let usableRoom = 0;
-    let roomBeforeLonger = 0;
-    let cost = 0;
-    let length = 0;
-    let boardCapacity = 0;
-    for (const load of loads) {
-      const option = this.chooser.best(load);
-      cost += option.cost;
-      length += option.length;
-      boardCapacity += option.capacity;
-      if (capacity - load < smallest) continue; // no piece left can go on this board
-      usableRoom += capacity - load;
-      roomBeforeLonger += option.capacity - load;
-    }
-    const overflow = rest - usableRoom;
-    const count = Math.max(this.boardsAtLeast, loads.length + (overflow > 0 ? Math.ceil(overflow / capacity) : 0));
-    const extra = count - loads.length;
-    const cheapest = this.chooser.cheapest;
-    let lengthBound = length + extra * this.shortest.length;
-    if (this.lengthOverCapacity !== null) {
-      const grown = boardCapacity + Math.max(extra * this.shortest.capacity, rest - roomBeforeLonger);
-      lengthBound = Math.max(lengthBound, grown + count * this.lengthOverCapacity);
-    }
-    return { count, cost: Math.max(cost + extra * cheapest.cost, this.costFloor), length: lengthBound };
-  }
-
-  get root(): Score {
-    return this.at([], this.totalSize, 0);
-  }
 }
 
 function firstFitDecreasing(sizes: readonly number[], capacity: number): Packing {
@@ -356,43 +249,49 @@ function emptyLightBoards(start: Boards, sizes: readonly number[], capacity: num
  */
 function rebalanceStock(boards: Boards, sizes: readonly number[], chooser: StockChooser, maxPasses: number): void {
   const { items, loads } = boards;
-  const pair = (load: number): [number, number, number] => {
-    if (load === 0) return [0, 0, 0];
-    const option = chooser.best(load);
-    return [1, option.cost, option.length];
+  const capacity = chooser.capacity;
+  // Change in (boards, cost, length) when two boards go from loads (a, b) to (a2, b2).
+  const improves = (a: number, b: number, a2: number, b2: number): boolean => {
+    let count = 0;
+    let cost = 0;
+    let length = 0;
+    for (const [load, sign] of [[a, -1], [b, -1], [a2, 1], [b2, 1]] as const) {
+      if (load === 0) continue;
+      const option = chooser.best(load);
+      count += sign;
+      cost += sign * option.cost;
+      length += sign * option.length;
+    }
+    return count < 0 || (count === 0 && (cost < 0 || (cost === 0 && length < 0)));
   };
-  const better = (before: number[], after: number[][]) => {
-    const [c0, c1, c2] = [0, 1, 2].map((k) => after.reduce((s, p) => s + p[k], 0) - before[k]);
-    return c0 < 0 || (c0 === 0 && (c1 < 0 || (c1 === 0 && c2 < 0)));
-  };
-  const add = (a: number[], b: number[]) => a.map((v, k) => v + b[k]);
   for (let pass = 0; pass < maxPasses; pass++) {
     let improved = false;
     for (let a = 0; a < items.length; a++) {
       for (let b = 0; b < items.length; b++) {
-        if (a === b) continue;
-        const before = add(pair(loads[a]), pair(loads[b]));
+        if (a === b || items[a].length === 0) continue;
         for (let i = 0; i < items[a].length; i++) {
           const x = items[a][i];
-          if (loads[b] + sizes[x] <= chooser.capacity && better(before, [pair(loads[a] - sizes[x]), pair(loads[b] + sizes[x])])) {
+          const sx = sizes[x];
+          if (loads[b] + sx <= capacity && improves(loads[a], loads[b], loads[a] - sx, loads[b] + sx)) {
             items[a].splice(i, 1);
             items[b].push(x);
-            loads[a] -= sizes[x];
-            loads[b] += sizes[x];
+            loads[a] -= sx;
+            loads[b] += sx;
             improved = true;
             break;
           }
-          const j = items[b].findIndex((y) => {
-            const shift = sizes[x] - sizes[y];
-            return shift !== 0 && loads[b] + shift <= chooser.capacity && loads[a] - shift <= chooser.capacity && better(before, [pair(loads[a] - shift), pair(loads[b] + shift)]);
-          });
-          if (j >= 0) {
-            const y = items[b][j];
-            const shift = sizes[x] - sizes[y];
-            items[a][i] = y;
+          let swapped = false;
+          for (let j = 0; j < items[b].length && !swapped; j++) {
+            const shift = sx - sizes[items[b][j]];
+            if (shift === 0 || loads[b] + shift > capacity || loads[a] - shift > capacity) continue;
+            if (!improves(loads[a], loads[b], loads[a] - shift, loads[b] + shift)) continue;
+            items[a][i] = items[b][j];
             items[b][j] = x;
             loads[a] -= shift;
             loads[b] += shift;
+            swapped = true;
+          }
+          if (swapped) {
             improved = true;
             break;
           }
@@ -420,19 +319,17 @@ export function heuristicPacking(sizes: readonly number[], chooser: StockChooser
   if (sizes.length <= QUADRATIC_LIMIT) {
     candidates.push(bestFitDecreasing(sizes, capacity), minimumSlack(sizes, capacity, 2000));
   }
-  let best: Packing | null = null;
+  let best: Boards | null = null;
   let bestScore: Score | null = null;
   for (const candidate of candidates) {
     let boards = toBoards(candidate, sizes);
-    if (sizes.length <= IMPROVE_LIMIT) {
-      boards = emptyLightBoards(boards, sizes, capacity);
-      if (chooser.hasChoice) rebalanceStock(boards, sizes, chooser, 8);
-    }
+    if (sizes.length <= IMPROVE_LIMIT) boards = emptyLightBoards(boards, sizes, capacity);
     const score = scorePacking(boards.items, sizes, chooser);
     if (!bestScore || compareScores(score, bestScore) < 0) {
-      best = boards.items;
+      best = boards;
       bestScore = score;
     }
   }
-  return best!;
+  if (chooser.hasChoice && sizes.length <= IMPROVE_LIMIT) rebalanceStock(best!, sizes, chooser, 6);
+  return best!.items;
 }

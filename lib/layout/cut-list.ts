@@ -2,9 +2,9 @@
 // which board. Lengths are exact Fractions of an inch; for the search they are scaled to
 // integers by the common denominator of every length given, so no float decides a fit.
 import { Fraction, ZERO, fromMillimetres, gt, lte, sum, toMillimetres, type Length, type Unit, type Warning } from "./core";
-import { exactPacking, repackFewer } from "./cut-list-exact";
-import { ScoreBound, StockChooser, compareScores, heuristicPacking, lowerBoundL2, scorePacking, type Packing, type StockOption } from "./cut-list-heuristic";
-import { formatMeasure } from "./measure";
+import { bestPossible, exactPacking, lowerBoundL2 } from "./cut-list-exact";
+import { StockChooser, compareScores, heuristicPacking, scorePacking, type Packing, type StockOption } from "./cut-list-heuristic";
+import { exactFromNumber, formatMeasure } from "./measure";
 
 export type CutPiece = { label: string; length: Fraction; quantity: number };
 export type StockLength = { length: Fraction; price?: number; label?: string };
@@ -60,9 +60,10 @@ export type CutListResult = {
   lowerBound: number;
   /**
    * Proven best: fewest boards, then least cost (when every stock length has a price), then
-   * least waste. True when the exact search finished, or when the plan meets the bound —
-   * `lowerBound` boards, each cut from the cheapest (then shortest) stock. A plan with
-   * `boardCount === lowerBound` has the fewest boards even when this is false.
+   * least waste. True when the exact search finished, or when the plan meets a lower bound
+   * on all three (`lowerBound` boards, and no `lowerBound` boards could cost less or be
+   * shorter). A plan with `boardCount === lowerBound` has the fewest boards even when this
+   * is false: then only the mix of stock lengths is unproven.
    */
   optimal: boolean;
   method: "exact" | "heuristic";
@@ -124,7 +125,7 @@ export function cutList(input: CutListInput): CutListResult {
   if (priced > 0 && !useCost) {
     warnings.push({ code: "price-missing", message: "Some stock lengths have no price, so the plan does not compare cost: it uses the fewest boards, then the shortest." });
   }
-  const prices = input.stock.map((stock) => (stock.price === undefined ? ZERO : new Fraction(stock.price)));
+  const prices = input.stock.map((stock) => (stock.price === undefined ? ZERO : exactFromNumber(stock.price)));
   const priceToInt = scaler(prices);
 
   const options: StockOption[] = [];
@@ -151,32 +152,27 @@ export function cutList(input: CutListInput): CutListResult {
   });
   items.sort((a, b) => b.size - a.size || a.row - b.row);
   const sizes = items.map((item) => item.size);
-  if (sizes.reduce((a, b) => a + b, 0) > Number.MAX_SAFE_INTEGER) throw new RangeError("the pieces are too many to plan exactly");
-
-  let packing: Packing = [];
-  let lowerBound = 0;
-  let optimal = true;
-  const method = items.length <= EXACT_PIECE_LIMIT || (input as { forceExact?: boolean }).forceExact ? "exact" : "heuristic";
-  if (items.length > 0) {
-    const chooser = new StockChooser(options);
-    lowerBound = lowerBoundL2(sizes, chooser.capacity);
-    const bound = new ScoreBound(chooser, lowerBound, sizes.reduce((a, b) => a + b, 0));
-    packing = heuristicPacking(sizes, chooser);
-    if (compareScores(scorePacking(packing, sizes, chooser), bound.root) > 0 && packing.length > lowerBound) {
-      packing = repackFewer(packing, sizes, chooser.capacity, lowerBound, 200_000, 40);
-    }
-    let complete = false;
-    if (method === "exact") {
-      const exact = exactPacking(sizes, chooser, packing, bound, (input as { nodeBudget?: number }).nodeBudget ?? EXACT_NODE_BUDGET);
-      packing = exact.packing;
-      complete = exact.complete;
-    }
-    optimal = complete || compareScores(scorePacking(packing, sizes, chooser), bound.root) <= 0;
-    const boards = packing.filter((board) => board.length > 0).length;
-    if (!optimal) warnings.push(notProvenMessage(boards, lowerBound));
-    return assemble(input, packing, items, chooser, { lowerBound, optimal, method, unplaced, warnings });
+  const mostCost = Math.max(0, ...options.map((option) => option.cost));
+  if (sizes.reduce((a, b) => a + b, 0) > Number.MAX_SAFE_INTEGER || mostCost * items.length > Number.MAX_SAFE_INTEGER) {
+    throw new RangeError("the pieces are too many to plan exactly");
   }
-  return assemble(input, packing, items, null, { lowerBound, optimal, method, unplaced, warnings });
+
+  const method = items.length <= EXACT_PIECE_LIMIT ? "exact" : "heuristic";
+  if (items.length === 0) return assemble(input, [], items, null, { lowerBound: 0, optimal: true, method, unplaced, warnings });
+
+  const chooser = new StockChooser(options);
+  const lowerBound = lowerBoundL2(sizes, chooser.capacity);
+  const bound = bestPossible(chooser, lowerBound, sizes.reduce((a, b) => a + b, 0));
+  let packing: Packing = heuristicPacking(sizes, chooser);
+  let complete = false;
+  if (method === "exact") {
+    const exact = exactPacking(sizes, chooser, packing, bound, EXACT_NODE_BUDGET);
+    packing = exact.packing;
+    complete = exact.complete;
+  }
+  const optimal = complete || compareScores(scorePacking(packing, sizes, chooser), bound) <= 0;
+  if (!optimal) warnings.push(notProvenMessage(packing.filter((board) => board.length > 0).length, lowerBound));
+  return assemble(input, packing, items, chooser, { lowerBound, optimal, method, unplaced, warnings });
 }
 
 type Verdict = Pick<CutListResult, "lowerBound" | "optimal" | "method" | "unplaced" | "warnings">;
@@ -211,7 +207,7 @@ function assemble(input: CutListInput, packing: Packing, items: Item[], chooser:
     else byStock.push({ stockIndex: board.stockIndex, stockLength: board.stockLength, count: 1, ...(board.price !== undefined && { price: board.price }) });
   }
   const everyPriced = boards.every((board) => board.price !== undefined);
-  const totalCost = everyPriced ? sum(boards.map((board) => new Fraction(board.price!))).valueOf() : undefined;
+  const totalCost = everyPriced ? sum(boards.map((board) => exactFromNumber(board.price!))).valueOf() : undefined;
   const totalPieceLength = sum(boards.flatMap((board) => board.cuts.map((cut) => cut.length)));
   const totalStockLength = sum(boards.map((board) => board.stockLength));
   const wastePercent = totalStockLength.n === 0n ? 0 : totalStockLength.sub(totalPieceLength).div(totalStockLength).mul(100).valueOf();
@@ -247,7 +243,7 @@ function tooLongMessage(piece: CutPiece, input: CutListInput, longestUsable: Len
 function notProvenMessage(boards: number, lowerBound: number): Warning {
   const message =
     boards > lowerBound
-      ? `This plan uses ${boards} boards. No plan can use fewer than ${lowerBound}; the search did not find one with ${lowerBound}, nor rule it out.`
+      ? `This plan uses ${boards} boards. No plan can use fewer than ${lowerBound}, and none with ${lowerBound} was found: this one is good, but not proven the fewest.`
       : `This plan uses the fewest boards possible (${boards}), but a cheaper or less wasteful mix of stock lengths may exist.`;
   return { code: "not-proven-optimal", message };
 }

@@ -14,5 +14,6 @@ export * from "./guards-schema";
 export * from "./stairs";
 export * from "./stairs-schema";
 export * from "./cut-list";
+export * from "./cut-list-schema";
 export * from "./wall-grid";
 export * from "./wall-grid-schema";

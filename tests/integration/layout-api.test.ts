@@ -107,3 +107,53 @@ describe("POST /api/layout/measure", () => {
     expect(res.body.error.fields.text).toMatch(/character \d+/);
   });
 });
+
+describe("POST /api/layout/cut-list", () => {
+  it("needs two boards for four 24\" pieces from 96\" stock with a 1/8\" kerf", async () => {
+    // common practice, no source: three kerfs of 1/8" make the last of four 24" pieces 3/8" short.
+    const { status, body } = await post("cut-list", { pieces: [{ label: "Rail", length: "24", quantity: 4 }], stock: [{ length: "96" }], kerf: "1/8" });
+    expect(status).toBe(200);
+    expect(body.boardCount).toBe(2);
+    expect(body.optimal).toBe(true);
+    expect(body.boards.flatMap((b: { cuts: unknown[] }) => b.cuts)).toHaveLength(4);
+  });
+
+  it("fits them on one board with no kerf", async () => {
+    const { body } = await post("cut-list", { pieces: [{ label: "Rail", length: "24", quantity: 4 }], stock: [{ length: "96" }], kerf: "0" });
+    expect(body.boardCount).toBe(1);
+  });
+
+  it("names the bad row", async () => {
+    const res = await post("cut-list", { pieces: [{ label: "Rail", length: "24", quantity: 4 }, { label: "Stile", length: "abc", quantity: 1 }], stock: [{ length: "96" }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toHaveProperty("pieces.1.length");
+  });
+});
+
+describe("POST /api/layout/wall-grid", () => {
+  it("cuts the verticals 84\" on a 96\" wall with a 5 1/2\" top board, 2 1/2\" bottom rail and 4\" base trim", async () => {
+    // common practice, no source: 96 − 5 1/2 − 2 1/2 − 4 = 84; six 2 1/2" verticals on 128 3/4" leave 22 3/4" bays.
+    const { status, body } = await post("wall-grid", {
+      wallWidth: "128 3/4",
+      wallHeight: "96",
+      topRailWidth: "5 1/2",
+      bottomRailWidth: "2 1/2",
+      baseTrimHeight: "4",
+      verticalWidth: "2 1/2",
+      verticalCount: 6,
+      rows: 0,
+    });
+    expect(status).toBe(200);
+    expect(body.verticalLength.exact).toBe("84");
+    expect(body.bay.exact).toBe("91/4");
+  });
+});
+
+describe("request size limits", () => {
+  it("refuses a cut list of more than 2,000 pieces before doing any work", async () => {
+    const pieces = Array.from({ length: 10 }, (_, i) => ({ label: `P${i}`, length: "12", quantity: 500 }));
+    const res = await post("cut-list", { pieces, stock: [{ length: "96" }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields.pieces).toMatch(/at most 2,000/);
+  });
+});

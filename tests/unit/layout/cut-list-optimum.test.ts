@@ -6,6 +6,8 @@ import { describe, expect, it } from "vitest";
 import { solve, type Model } from "yalps";
 import { Fraction } from "@/lib/layout/core";
 import { cutList, type CutListInput } from "@/lib/layout/cut-list";
+import { bestPossible, exactPacking, lowerBoundL2 } from "@/lib/layout/cut-list-exact";
+import { StockChooser } from "@/lib/layout/cut-list-heuristic";
 
 // Everything in the model is in 32nds of an inch: pieces are in 16ths, kerfs 3/32 or 1/8.
 const UNIT = 32;
@@ -102,8 +104,11 @@ const cases = (inSixteenths: boolean, priced: boolean): fc.Arbitrary<Case> =>
     trim: fc.constantFrom(0, 16),
   }).filter((c) => c.pieces.every((piece) => piece.length <= Math.max(...c.stock.map((s) => s.length)) - c.trim));
 
+let aboveBound = 0;
+
 function agrees(c: Case) {
   const result = cutList(toInput(c));
+  if (result.boardCount > result.lowerBound) aboveBound += 1;
   const optimum = yalpsOptimum(c);
   expect(result.method).toBe("exact");
   expect(result.optimal).toBe(true);
@@ -111,6 +116,17 @@ function agrees(c: Case) {
   if (optimum.cost !== undefined) expect(result.totalCost).toBe(optimum.cost);
   expect(result.totalStockLength.equals(optimum.length)).toBe(true);
   expect(result.lowerBound).toBeLessThanOrEqual(optimum.count);
+
+  // The search on its own, from the worst start (a board per piece), so it cannot lean on
+  // the heuristic having found the optimum already.
+  const priced = optimum.cost !== undefined;
+  const options = c.stock.map((stock, index) => ({ capacity: stock.length - c.trim + c.kerf, cost: priced ? stock.price! : 0, length: stock.length, index }));
+  const sizes = c.pieces.flatMap((piece) => new Array<number>(piece.quantity).fill(piece.length + c.kerf)).sort((a, b) => b - a);
+  const chooser = new StockChooser(options);
+  const bound = bestPossible(chooser, lowerBoundL2(sizes, chooser.capacity), sizes.reduce((a, b) => a + b, 0));
+  const search = exactPacking(sizes, chooser, sizes.map((_, item) => [item]), bound, 5_000_000);
+  expect(search.complete).toBe(true);
+  expect(search.score).toEqual({ count: optimum.count, cost: optimum.cost ?? 0, length: optimum.length * UNIT });
 }
 
 describe("cutList matches the optimum yalps proves", () => {
@@ -124,5 +140,28 @@ describe("cutList matches the optimum yalps proves", () => {
 
   it("on priced stock (fewest boards, then least cost, then least stock)", () => {
     fc.assert(fc.property(cases(true, true), agrees), { seed: 1603, numRuns: 150 });
+  });
+
+  // Pieces of a fifth to two thirds of a board: the bound is often short of the optimum, so
+  // the search itself has to prove the count, and the choice of stock matters.
+  const awkward = (priced: boolean): fc.Arbitrary<Case> =>
+    fc.record({
+      pieces: fc
+        .array(fc.record({ length: sixteenthLength(18, 60), quantity: fc.integer({ min: 1, max: 3 }) }), { minLength: 3, maxLength: 6 })
+        .filter((pieces) => pieces.reduce((n, piece) => n + piece.quantity, 0) <= 12),
+      stock: fc.uniqueArray(fc.record({ length: fc.constantFrom(72, 96, 120, 144).map((n) => n * UNIT), price: priced ? fc.integer({ min: 3, max: 40 }) : fc.constant(undefined) }), {
+        minLength: 1,
+        maxLength: 2,
+        selector: (stock) => stock.length,
+      }),
+      kerf: fc.constantFrom(0, 3, 4),
+      trim: fc.constantFrom(0, 16),
+    });
+
+  it("on awkward lists, where the search must prove more than the bound", () => {
+    aboveBound = 0;
+    fc.assert(fc.property(awkward(false), agrees), { seed: 1604, numRuns: 150 });
+    fc.assert(fc.property(awkward(true), agrees), { seed: 1605, numRuns: 150 });
+    expect(aboveBound).toBeGreaterThan(10);
   });
 });
