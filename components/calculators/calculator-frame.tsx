@@ -39,7 +39,7 @@ export function CalculatorFrame({ kind, title, inputs, results, query, compact =
           <SaveLayoutButton kind={kind} query={query} signedIn={signedIn} />
         </div>
       )}
-      <div className={compact ? "grid gap-4 md:grid-cols-[minmax(0,18rem)_1fr]" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr]"}>
+      <div className={compact ? "grid gap-4 md:grid-cols-[minmax(0,18rem)_1fr] print:block" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr] print:block"}>
         <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} className="space-y-3" aria-label={`${title} inputs`}>
           {inputs}
         </form>

@@ -1,3 +1,4 @@
+import { useId } from "react";
 import type { EvenSpacingResult } from "@/lib/layout/spacing";
 import { HDimension, MarkNumber } from "./dimension";
 import { lengthText, type Display } from "./readouts";
@@ -12,6 +13,8 @@ const HEIGHT = 170;
  * ends when the layout has gaps at its ends.
  */
 export function SpacingDrawing({ result, display, memberName = "member" }: { result: EvenSpacingResult; display: Display; memberName?: string }) {
+  // Several drawings can share a lesson page, so their title and description ids must differ.
+  const id = useId();
   const span = result.span.valueOf();
   const scale = (WIDTH - PAD * 2) / span;
   const x = (inches: number) => PAD + inches * scale;
@@ -27,9 +30,9 @@ export function SpacingDrawing({ result, display, memberName = "member" }: { res
 
   return (
     <figure className="card overflow-hidden p-2">
-      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-labelledby="spacing-title spacing-desc" className="w-full">
-        <title id="spacing-title">Layout drawing</title>
-        <desc id="spacing-desc">{description}</desc>
+      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-labelledby={`${id}-title ${id}-desc`} className="w-full">
+        <title id={`${id}-title`}>Layout drawing</title>
+        <desc id={`${id}-desc`}>{description}</desc>
         <rect x={x(0)} y={top} width={span * scale} height={bottom - top} className="fill-paper-sunk stroke-rule-strong" strokeWidth={0.8} />
         {result.endCondition === "gaps" ? (
           <>

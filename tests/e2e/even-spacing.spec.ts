@@ -14,12 +14,12 @@ test("changing the inputs changes the marks, the drawing and the address", async
   await expect(page.getByText("reads as 10' 8 3/4\"")).toBeVisible();
   await expect(marks(page).getByRole("row")).toHaveCount(7);
   await expect(marks(page).getByRole("row").nth(2)).toContainText('25 1/4"');
-  await expect(page.locator("#spacing-desc")).toContainText('5 equal gaps of 22 3/4"');
+  await expect(page.getByRole("img", { name: "Layout drawing" }).locator("desc")).toContainText('5 equal gaps of 22 3/4"');
   await expect(page).toHaveURL(/span=128\+3%2F4/);
 
   await page.getByLabel("Number of members").fill("7");
   await expect(marks(page).getByRole("row")).toHaveCount(8);
-  await expect(page.locator("#spacing-desc")).toContainText("6 equal gaps");
+  await expect(page.getByRole("img", { name: "Layout drawing" }).locator("desc")).toContainText("6 equal gaps");
 });
 
 test("an unreadable length says what is wrong and the old results go away", async ({ page }) => {
