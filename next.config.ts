@@ -15,7 +15,7 @@ const nextConfig: NextConfig = {
 // Plugins are named as strings: Turbopack can only pass serializable options to the loader.
 const withMDX = createMDX({
   options: {
-    remarkPlugins: ["remark-math"],
+    remarkPlugins: ["remark-gfm", "remark-math"],
     rehypePlugins: [["rehype-katex", { strict: false }]],
   },
 });

@@ -5,6 +5,7 @@ export type NavItem = { href: string; label: string; roles?: readonly Role[] };
 // Areas appear here as they are built; `roles` hides an item from everyone else
 // (the pages check again on the server — hiding a link is not authorization).
 export const NAV_ITEMS: readonly NavItem[] = [
+  { href: "/lessons", label: "Lessons" },
   { href: "/calculators", label: "Calculators" },
   { href: "/my-classes", label: "My classes", roles: ["student"] },
   { href: "/classes", label: "Classes", roles: ["instructor", "admin"] },

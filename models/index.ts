@@ -1,11 +1,12 @@
 import type { Sequelize } from "sequelize";
 import { ClassInstructor } from "./class-instructor";
 import { Enrollment } from "./enrollment";
+import { LessonProgress } from "./lesson-progress";
 import { SavedLayout } from "./saved-layout";
 import { SchoolClass } from "./school-class";
 import { User } from "./user";
 
-export { ClassInstructor, Enrollment, SavedLayout, SchoolClass, User };
+export { ClassInstructor, Enrollment, LessonProgress, SavedLayout, SchoolClass, User };
 export type { Role } from "./user";
 export { ROLES } from "./user";
 
@@ -15,6 +16,7 @@ export type Models = {
   Enrollment: typeof Enrollment;
   ClassInstructor: typeof ClassInstructor;
   SavedLayout: typeof SavedLayout;
+  LessonProgress: typeof LessonProgress;
 };
 
 let initialisedFor: Sequelize | undefined;
@@ -27,6 +29,7 @@ export function initModels(sequelize: Sequelize): Models {
     Enrollment.initModel(sequelize);
     ClassInstructor.initModel(sequelize);
     SavedLayout.initModel(sequelize);
+    LessonProgress.initModel(sequelize);
 
     SchoolClass.belongsTo(User, { as: "instructor", foreignKey: "instructorId" });
     User.hasMany(SchoolClass, { as: "taughtClasses", foreignKey: "instructorId" });
@@ -38,7 +41,8 @@ export function initModels(sequelize: Sequelize): Models {
     ClassInstructor.belongsTo(User, { as: "user", foreignKey: "userId" });
     SchoolClass.hasMany(ClassInstructor, { as: "coInstructors", foreignKey: "classId" });
     SavedLayout.belongsTo(User, { as: "owner", foreignKey: "userId" });
+    LessonProgress.belongsTo(User, { as: "learner", foreignKey: "userId" });
     initialisedFor = sequelize;
   }
-  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout };
+  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout, LessonProgress };
 }

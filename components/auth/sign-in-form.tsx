@@ -2,7 +2,6 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
-import { useRouter } from "next/navigation";
 import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -16,7 +15,6 @@ type Values = z.input<typeof signInSchema>;
 const WRONG_CREDENTIALS = "That e-mail and password do not match an account. Check both and try again.";
 
 export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string; initialError?: string }) {
-  const router = useRouter();
   const [formError, setFormError] = useState<string | undefined>(initialError ? describe(initialError) : undefined);
   const {
     register,
@@ -31,8 +29,8 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string;
       setFormError(describe(result?.error ?? "network"));
       return;
     }
-    router.replace(callbackUrl);
-    router.refresh();
+    // A full load, so the header and every cached view start again as the signed-in user.
+    window.location.assign(callbackUrl);
   });
 
   return (

@@ -2,7 +2,6 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
-import { useRouter } from "next/navigation";
 import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -12,7 +11,6 @@ import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 
 export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
-  const router = useRouter();
   const [formError, setFormError] = useState<string>();
   const {
     register,
@@ -41,11 +39,13 @@ export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
     }
     const result = await signIn("credentials", { email: values.email, password: values.password, redirect: false });
     if (result?.error) {
-      router.replace("/signin");
+      // A full load, like the success path below, so the header starts again.
+      // eslint-disable-next-line @next/next/no-location-assign-relative-destination
+      window.location.assign("/signin");
       return;
     }
-    router.replace(callbackUrl);
-    router.refresh();
+    // A full load, so the header and every cached view start again as the signed-in user.
+    window.location.assign(callbackUrl);
   });
 
   return (

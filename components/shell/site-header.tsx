@@ -1,13 +1,8 @@
 import Link from "next/link";
-import { getCurrentUser } from "@/lib/auth/session";
-import { navFor } from "@/lib/navigation";
-import { NavLinks } from "./nav-links";
+import { HeaderAccount, HeaderNav } from "./header-account";
 import { TapeRule } from "./tape-rule";
-import { UserMenu } from "./user-menu";
 
-export async function SiteHeader() {
-  const user = await getCurrentUser();
-  const items = navFor(user?.role ?? null);
+export function SiteHeader() {
   return (
     <header data-chrome className="border-b border-rule bg-paper-raised">
       <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2">
@@ -16,21 +11,10 @@ export async function SiteHeader() {
           <span className="text-xl font-bold tracking-tight">Sixteenths</span>
         </Link>
         <nav aria-label="Main" className="order-last -mx-2 w-full sm:order-none sm:mx-0 sm:w-auto sm:flex-1">
-          <NavLinks items={items} />
+          <HeaderNav />
         </nav>
         <div className="ml-auto flex items-center gap-2">
-          {user ? (
-            <UserMenu user={user} />
-          ) : (
-            <>
-              <Link href="/signin" className="btn-quiet">
-                Sign in
-              </Link>
-              <Link href="/signup" className="btn-primary hidden sm:inline-flex">
-                Create account
-              </Link>
-            </>
-          )}
+          <HeaderAccount />
         </div>
       </div>
       <TapeRule />

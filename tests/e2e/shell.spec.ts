@@ -9,7 +9,9 @@ test("the home page has the product name, the main navigation and the safety lin
 });
 
 test("nothing overflows the page sideways", async ({ page }) => {
-  for (const path of ["/", "/signin", "/signup", "/safety"]) {
+  test.setTimeout(60_000);
+  const calculators = ["even-spacing", "wall-grid", "cut-list", "guard-spacing", "stairs", "fraction-bench"].map((k) => `/calculators/${k}`);
+  for (const path of ["/", "/signin", "/signup", "/safety", "/calculators", ...calculators, "/lessons", "/lessons/board-and-batten-wall"]) {
     await page.goto(path);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow, `${path} scrolls sideways`).toBeLessThanOrEqual(0);

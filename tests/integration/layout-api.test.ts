@@ -144,8 +144,8 @@ describe("POST /api/layout/wall-grid", () => {
       rows: 0,
     });
     expect(status).toBe(200);
-    expect(body.verticalLength.exact).toBe("84");
-    expect(body.bay.exact).toBe("91/4");
+    expect(body.verticalLength.exact.exact).toBe("84");
+    expect(body.bay.exact.exact).toBe("91/4");
   });
 });
 
