@@ -16,7 +16,7 @@ async function fetchMe(url: string): Promise<SessionUser | null> {
   return ((await res.json()) as { user: SessionUser }).user;
 }
 
-export function useCurrentUser() {
+function useCurrentUser() {
   return useSWR("/api/me", fetchMe, { revalidateOnFocus: true });
 }
 

@@ -41,12 +41,3 @@ export function lessonHeadings(file: string): Heading[] {
   }
   return headings;
 }
-
-export function lessonWordCount(file: string): number {
-  const text = fs.readFileSync(path.join(DIR, file), "utf8");
-  return text
-    .replace(/export const metadata[\s\S]*?\n\};/, "")
-    .replace(/<[^>]+>/g, " ")
-    .split(/\s+/)
-    .filter(Boolean).length;
-}
