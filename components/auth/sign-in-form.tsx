@@ -9,6 +9,7 @@ import type { z } from "zod";
 import { signInSchema } from "@/lib/accounts/schemas";
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
+import { useHydrated } from "@/components/ui/use-hydrated";
 
 type Values = z.input<typeof signInSchema>;
 
@@ -16,6 +17,7 @@ const WRONG_CREDENTIALS = "That e-mail and password do not match an account. Che
 
 export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string; initialError?: string }) {
   const [formError, setFormError] = useState<string | undefined>(initialError ? describe(initialError) : undefined);
+  const hydrated = useHydrated();
   const {
     register,
     handleSubmit,
@@ -40,11 +42,13 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string;
           <Alert tone="error">{formError}</Alert>
         </div>
       ) : null}
-      <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
-      <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
-        {isSubmitting ? "Signing in…" : "Sign in"}
-      </button>
+      <fieldset disabled={!hydrated} className="min-w-0 space-y-4">
+        <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
+        <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
+        <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
+          {isSubmitting ? "Signing in…" : "Sign in"}
+        </button>
+      </fieldset>
       <p className="text-sm text-ink-soft">
         New here? <Link href={`/signup?callbackUrl=${encodeURIComponent(callbackUrl)}`}>Create an account</Link>.
       </p>

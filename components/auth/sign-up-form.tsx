@@ -9,9 +9,11 @@ import { signUpSchema, type SignUpInput } from "@/lib/accounts/schemas";
 import type { ErrorBody } from "@/lib/errors";
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
+import { useHydrated } from "@/components/ui/use-hydrated";
 
 export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
   const [formError, setFormError] = useState<string>();
+  const hydrated = useHydrated();
   const {
     register,
     handleSubmit,
@@ -51,19 +53,21 @@ export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {formError ? <Alert tone="error">{formError}</Alert> : null}
-      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
-      <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 10 characters. A short phrase is easier to remember than a jumble."
-        error={errors.password?.message}
-        {...register("password")}
-      />
-      <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
-        {isSubmitting ? "Creating your account…" : "Create account"}
-      </button>
+      <fieldset disabled={!hydrated} className="min-w-0 space-y-4">
+        <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
+        <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="new-password"
+          hint="At least 10 characters. A short phrase is easier to remember than a jumble."
+          error={errors.password?.message}
+          {...register("password")}
+        />
+        <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
+          {isSubmitting ? "Creating your account…" : "Create account"}
+        </button>
+      </fieldset>
       <p className="text-sm text-ink-soft">
         Already have an account? <Link href="/signin">Sign in</Link>. Enrolled in a class? Your instructor sends an invitation, or gives
         you a join code to enter after you sign up.

@@ -3,6 +3,7 @@
 import type { ReactNode } from "react";
 import { CopyLinkButton, PrintButton } from "./toolbar-buttons";
 import { SaveLayoutButton } from "./save-layout-button";
+import { useHydrated } from "@/components/ui/use-hydrated";
 import type { CalculatorKind } from "@/lib/calculators";
 
 type Props = {
@@ -26,6 +27,7 @@ type Props = {
  * hides the inputs and prints the results as a one-page shop sheet.
  */
 export function CalculatorFrame({ kind, title, inputs, results, query, compact = false, signedIn = false, sheetSummary }: Props) {
+  const hydrated = useHydrated();
   return (
     <section aria-label={`${title} calculator`} className={compact ? "card my-6 space-y-4 p-4" : "space-y-4"} data-calculator={kind}>
       <div className="hidden print:block">
@@ -40,8 +42,10 @@ export function CalculatorFrame({ kind, title, inputs, results, query, compact =
         </div>
       )}
       <div className={compact ? "grid gap-4 md:grid-cols-[minmax(0,18rem)_1fr] print:block" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr] print:block"}>
-        <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} className="space-y-3" aria-label={`${title} inputs`}>
-          {inputs}
+        <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} aria-label={`${title} inputs`}>
+          <fieldset disabled={!hydrated} className="min-w-0 space-y-3">
+            {inputs}
+          </fieldset>
         </form>
         <div className="min-w-0 space-y-4" aria-live="polite">
           {results}

@@ -3,6 +3,7 @@
 import { useId, type ReactNode } from "react";
 import type { UseFormRegisterReturn } from "react-hook-form";
 import type { Problem } from "./fraction-bench-results";
+import { useHydrated } from "@/components/ui/use-hydrated";
 
 /** One headed part of the bench, with its own small form and its answer beneath. */
 export function BenchSection({ title, intro, children, printed = false }: { title: string; intro?: ReactNode; children: ReactNode; printed?: boolean }) {
@@ -20,9 +21,12 @@ export function BenchSection({ title, intro, children, printed = false }: { titl
 
 /** A small form of its own: Enter does nothing, and the print hides it with the other inputs. */
 export function BenchForm({ label, children, className = "" }: { label: string; children: ReactNode; className?: string }) {
+  const hydrated = useHydrated();
   return (
-    <form data-chrome noValidate aria-label={label} onSubmit={(e) => e.preventDefault()} className={`space-y-2 ${className}`}>
-      {children}
+    <form data-chrome noValidate aria-label={label} onSubmit={(e) => e.preventDefault()}>
+      <fieldset disabled={!hydrated} className={`min-w-0 space-y-2 ${className}`}>
+        {children}
+      </fieldset>
     </form>
   );
 }
