@@ -7,6 +7,7 @@ export type NavItem = { href: string; label: string; roles?: readonly Role[] };
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/lessons", label: "Lessons" },
   { href: "/calculators", label: "Calculators" },
+  { href: "/practice", label: "Practice" },
   { href: "/my-classes", label: "My classes", roles: ["student"] },
   { href: "/classes", label: "Classes", roles: ["instructor", "admin"] },
   { href: "/admin/users", label: "Users", roles: ["admin"] },

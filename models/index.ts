@@ -1,12 +1,14 @@
 import type { Sequelize } from "sequelize";
+import { Attempt } from "./attempt";
 import { ClassInstructor } from "./class-instructor";
 import { Enrollment } from "./enrollment";
 import { LessonProgress } from "./lesson-progress";
+import { PracticeProblem } from "./practice-problem";
 import { SavedLayout } from "./saved-layout";
 import { SchoolClass } from "./school-class";
 import { User } from "./user";
 
-export { ClassInstructor, Enrollment, LessonProgress, SavedLayout, SchoolClass, User };
+export { Attempt, ClassInstructor, Enrollment, LessonProgress, PracticeProblem, SavedLayout, SchoolClass, User };
 export type { Role } from "./user";
 export { ROLES } from "./user";
 
@@ -17,6 +19,8 @@ export type Models = {
   ClassInstructor: typeof ClassInstructor;
   SavedLayout: typeof SavedLayout;
   LessonProgress: typeof LessonProgress;
+  PracticeProblem: typeof PracticeProblem;
+  Attempt: typeof Attempt;
 };
 
 let initialisedFor: Sequelize | undefined;
@@ -30,6 +34,8 @@ export function initModels(sequelize: Sequelize): Models {
     ClassInstructor.initModel(sequelize);
     SavedLayout.initModel(sequelize);
     LessonProgress.initModel(sequelize);
+    PracticeProblem.initModel(sequelize);
+    Attempt.initModel(sequelize);
 
     SchoolClass.belongsTo(User, { as: "instructor", foreignKey: "instructorId" });
     User.hasMany(SchoolClass, { as: "taughtClasses", foreignKey: "instructorId" });
@@ -42,7 +48,11 @@ export function initModels(sequelize: Sequelize): Models {
     SchoolClass.hasMany(ClassInstructor, { as: "coInstructors", foreignKey: "classId" });
     SavedLayout.belongsTo(User, { as: "owner", foreignKey: "userId" });
     LessonProgress.belongsTo(User, { as: "learner", foreignKey: "userId" });
+    PracticeProblem.belongsTo(User, { as: "learner", foreignKey: "userId" });
+    PracticeProblem.hasMany(Attempt, { as: "attempts", foreignKey: "problemId" });
+    Attempt.belongsTo(PracticeProblem, { as: "problem", foreignKey: "problemId" });
+    Attempt.belongsTo(User, { as: "learner", foreignKey: "userId" });
     initialisedFor = sequelize;
   }
-  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout, LessonProgress };
+  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout, LessonProgress, PracticeProblem, Attempt };
 }

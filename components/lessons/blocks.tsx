@@ -2,6 +2,9 @@ import Link from "next/link";
 import type { ReactNode } from "react";
 import { CALCULATORS, calculatorPath, type CalculatorKind } from "@/lib/calculators";
 import { headingId } from "@/lib/lessons/text";
+import { SKILL_TITLES } from "@/lib/practice/skills";
+import { PROBLEM_KINDS, type Skill } from "@/lib/problems";
+import { LessonPractice } from "@/components/practice/lesson-practice";
 
 export function Caution({ title = "Caution", children }: { title?: string; children: ReactNode }) {
   return (
@@ -30,7 +33,7 @@ export function Figure({ caption, children }: { caption: string; children: React
   );
 }
 
-// Skills map onto the calculator that works them, until graded practice problems exist for each.
+// The calculator that checks each skill's working, offered beside the live problem.
 const CALCULATOR_FOR_SKILL: Record<string, CalculatorKind> = {
   "tape-reading": "fraction-bench",
   fractions: "fraction-bench",
@@ -56,13 +59,20 @@ export function Practice({ kind }: { kind: string }) {
   }
   const calculator = CALCULATOR_FOR_SKILL[kind] ?? "even-spacing";
   const title = CALCULATORS.find((c) => c.kind === calculator)?.title ?? "calculator";
+  const hasProblems = PROBLEM_KINDS.some((k) => k.skill === kind);
   return (
-    <aside data-chrome className="my-6 rounded-lg border border-rule bg-paper-sunk p-4">
-      <p className="font-semibold">Check your answers</p>
-      <p className="text-ink-soft">
-        Work the questions on paper first, then check each one in the <Link href={calculatorPath(calculator)}>{title.toLowerCase()} calculator</Link>.
+    <>
+      {hasProblems ? <LessonPractice skill={kind} title={SKILL_TITLES[kind as Skill]} /> : null}
+      <p data-chrome className="text-sm text-ink-soft">
+        Working the questions above on paper? Check each one in the <Link href={calculatorPath(calculator)}>{title.toLowerCase()} calculator</Link>
+        {hasProblems ? (
+          <>
+            , or practise more on the <Link href="/practice">practice page</Link>
+          </>
+        ) : null}
+        .
       </p>
-    </aside>
+    </>
   );
 }
 

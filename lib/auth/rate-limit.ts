@@ -6,6 +6,10 @@ const limiters = {
   signIn: new RateLimiterMemory({ keyPrefix: "sign-in", points: 8, duration: 15 * 60 }),
   // A school shop signs up a whole class from one address, so allow a class-sized burst.
   signUp: new RateLimiterMemory({ keyPrefix: "sign-up", points: 40, duration: 60 * 60 }),
+  // Far above what a student types (a try every two seconds), low enough to stop a script guessing.
+  // The load benchmark raises it through the environment; nothing else should.
+  answers: new RateLimiterMemory({ keyPrefix: "answers", points: Number(process.env.ANSWERS_PER_MINUTE) || 30, duration: 60 }),
+  newProblem: new RateLimiterMemory({ keyPrefix: "new-problem", points: 60, duration: 60 }),
 };
 
 export type LimitName = keyof typeof limiters;

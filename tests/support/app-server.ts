@@ -15,7 +15,7 @@ const root = process.cwd();
  * Starts the built app (`next build` must have run) on a free loopback port with its
  * own freshly migrated SQLite file in a temp folder — never the demo database.
  */
-export async function startApp({ seed = true }: { seed?: boolean } = {}): Promise<RunningApp> {
+export async function startApp({ seed = true, env: extraEnv = {} }: { seed?: boolean; env?: Record<string, string> } = {}): Promise<RunningApp> {
   if (!fs.existsSync(path.join(root, process.env.NEXT_DIST_DIR ?? ".next", "BUILD_ID"))) {
     throw new Error("No production build found: run `npm run build` first (npm test does it for you).");
   }
@@ -28,7 +28,7 @@ export async function startApp({ seed = true }: { seed?: boolean } = {}): Promis
   const secret = crypto.randomBytes(32).toString("base64url");
   const child: ChildProcess = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: "production", DATABASE_PATH: databasePath, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: url, BCRYPT_COST: "10" },
+    env: { ...process.env, NODE_ENV: "production", DATABASE_PATH: databasePath, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: url, BCRYPT_COST: "10", ...extraEnv },
     stdio: ["ignore", "pipe", "pipe"],
   });
   let output = "";

@@ -28,10 +28,10 @@ describe("decideAccess", () => {
 
 describe("navigation", () => {
   it("shows each role only its own areas", () => {
-    expect(navFor(null).map((i) => i.label)).toEqual(["Lessons", "Calculators"]);
-    expect(navFor("student").map((i) => i.label)).toEqual(["Lessons", "Calculators", "My classes"]);
-    expect(navFor("instructor").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Classes"]);
-    expect(navFor("admin").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Classes", "Users"]);
+    expect(navFor(null).map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice"]);
+    expect(navFor("student").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "My classes"]);
+    expect(navFor("instructor").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "Classes"]);
+    expect(navFor("admin").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "Classes", "Users"]);
   });
 
   it.each([

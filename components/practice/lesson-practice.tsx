@@ -1,0 +1,50 @@
+"use client";
+
+import { useState } from "react";
+import type { ProblemView } from "@/lib/practice/view";
+import { useCurrentUser } from "@/components/shell/use-current-user";
+import { ProblemWorkspace } from "./problem-workspace";
+import { startProblem } from "./start-button";
+
+/**
+ * A live problem inside a lesson. The lesson page is static, so the problem is only created
+ * when the reader asks for one — each reader gets their own numbers, graded on the server.
+ */
+export function LessonPractice({ skill, title }: { skill: string; title: string }) {
+  const { data: user } = useCurrentUser();
+  const [problem, setProblem] = useState<ProblemView>();
+  const [state, setState] = useState<{ busy: boolean; error?: string }>({ busy: false });
+
+  if (problem) {
+    return (
+      <div className="card my-6 p-4" data-lesson-practice={skill}>
+        <ProblemWorkspace key={problem.id} initial={problem} signedIn={Boolean(user)} headingLevel="h2" onAnother={setProblem} />
+      </div>
+    );
+  }
+  return (
+    <aside data-chrome data-lesson-practice={skill} className="my-6 space-y-2 rounded-lg border border-rule bg-paper-sunk p-4">
+      <p className="font-semibold">Try one: {title}</p>
+      <p className="text-ink-soft">A problem with your own numbers, checked as you go, with the worked solution at the end.</p>
+      <button
+        type="button"
+        className="btn-primary"
+        disabled={state.busy}
+        onClick={async () => {
+          setState({ busy: true });
+          const result = await startProblem({ skill });
+          if (!result.ok) return setState({ busy: false, error: result.message });
+          setProblem(result.problem);
+          setState({ busy: false });
+        }}
+      >
+        {state.busy ? "Starting…" : "Start a practice problem"}
+      </button>
+      {state.error ? (
+        <p role="alert" className="text-sm text-danger">
+          {state.error}
+        </p>
+      ) : null}
+    </aside>
+  );
+}

@@ -1,0 +1,51 @@
+import type { ProblemFigure } from "@/lib/problems/types";
+
+const TONES: Record<ProblemFigure["rects"][number]["tone"], string> = {
+  member: "fill-paper-sunk stroke-ink",
+  rail: "fill-paper-sunk stroke-ink",
+  trim: "fill-rule stroke-ink",
+  stud: "fill-none stroke-rule-strong [stroke-dasharray:3_3]",
+  stock: "fill-paper-raised stroke-ink",
+  post: "fill-rule-strong stroke-ink",
+  tread: "fill-paper-sunk stroke-ink",
+  highlight: "fill-chalk stroke-chalk-dark",
+};
+
+/** The prompt's drawing, scaled to fit; dimension strings are drawn like the calculators'. */
+export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
+  const pad = Math.max(figure.width, figure.height) * 0.04 + 2;
+  const font = Math.max(figure.width / 36, 2.2);
+  const dimY = figure.dimensions.map((d) => d.y);
+  const top = Math.min(0, ...dimY) - font * 1.6 - pad;
+  const bottom = Math.max(figure.height, ...dimY) + pad;
+  const stroke = Math.max(figure.width / 600, 0.15);
+  return (
+    <svg role="img" aria-labelledby="problem-figure-desc" viewBox={`${-pad} ${top} ${figure.width + 2 * pad} ${bottom - top}`} className="h-auto max-h-80 w-full" data-problem-figure>
+      <desc id="problem-figure-desc">{figure.description}</desc>
+      {figure.rects.map((r, i) => (
+        <g key={i}>
+          <rect x={r.x} y={r.y} width={Math.max(r.w, stroke)} height={Math.max(r.h, stroke)} strokeWidth={stroke} className={TONES[r.tone]} />
+          {r.label ? (
+            <text x={r.x + r.w / 2} y={r.y + r.h / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" className="fill-ink font-mono" aria-hidden="true">
+              {r.label}
+            </text>
+          ) : null}
+        </g>
+      ))}
+      {figure.dimensions.map((d, i) => {
+        const tick = font * 0.5;
+        const asked = d.label.includes("?");
+        return (
+          <g key={`d${i}`} aria-hidden="true" className={asked ? "text-chalk-dark" : "text-ink"}>
+            <line x1={d.x1} x2={d.x2} y1={d.y} y2={d.y} stroke="currentColor" strokeWidth={stroke * 1.2} />
+            <line x1={d.x1} x2={d.x1} y1={d.y - tick} y2={d.y + tick} stroke="currentColor" strokeWidth={stroke * 1.2} />
+            <line x1={d.x2} x2={d.x2} y1={d.y - tick} y2={d.y + tick} stroke="currentColor" strokeWidth={stroke * 1.2} />
+            <text x={(d.x1 + d.x2) / 2} y={d.y - tick * 0.8} fontSize={font} textAnchor="middle" className={`fill-current font-mono ${asked ? "font-bold" : ""}`}>
+              {d.label}
+            </text>
+          </g>
+        );
+      })}
+    </svg>
+  );
+}

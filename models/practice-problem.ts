@@ -1,0 +1,39 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { User } from "./user";
+
+export const PROBLEM_STATUSES = ["open", "solved", "failed"] as const;
+export type ProblemStatus = (typeof PROBLEM_STATUSES)[number];
+
+export class PracticeProblem extends Model<InferAttributes<PracticeProblem>, InferCreationAttributes<PracticeProblem>> {
+  declare id: string;
+  declare userId: ForeignKey<User["id"]> | null;
+  declare visitorId: string | null;
+  declare kind: string;
+  declare level: number;
+  declare seed: number;
+  declare attemptsAllowed: number;
+  declare attemptsUsed: CreationOptional<number>;
+  declare status: CreationOptional<ProblemStatus>;
+  declare finishedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    PracticeProblem.init(
+      {
+        id: { type: DataTypes.STRING(36), primaryKey: true },
+        visitorId: { type: DataTypes.STRING(36), allowNull: true },
+        kind: { type: DataTypes.STRING(40), allowNull: false },
+        level: { type: DataTypes.INTEGER, allowNull: false },
+        seed: { type: DataTypes.INTEGER, allowNull: false },
+        attemptsAllowed: { type: DataTypes.INTEGER, allowNull: false },
+        attemptsUsed: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "open" },
+        finishedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "practice_problems", modelName: "PracticeProblem" },
+    );
+  }
+}

@@ -1,0 +1,92 @@
+// Speed of grading, side by side in one run. In process: graded parts per second over a mix of
+// every problem kind (parse, solve, compare, diagnose — what the answer route does besides the
+// database). Over HTTP, with the built app on loopback: the answer route beside GET /api/health
+// on the same server, driven by autocannon from this second process, as a ratio.
+// It only prints; nothing here passes or fails.
+//
+//   npm run build && npx tsx scripts/bench-grading.ts
+import { randomUUID } from "node:crypto";
+import autocannon from "autocannon";
+import { openDatabase } from "@/lib/db";
+import { gradeAnswer } from "@/lib/grading/grade";
+import { LEVELS, PROBLEM_KINDS } from "@/lib/problems";
+import { roundedAnswer } from "@/lib/problems/kit";
+import { startApp } from "../tests/support/app-server";
+
+const MEASURE_MS = 2000;
+
+function gradingMix() {
+  // A fixed mix: every kind at every level, 50 seeds each, answered with the rounded solution plus a slip-sized error.
+  const cases = PROBLEM_KINDS.flatMap((kind) =>
+    LEVELS.flatMap((level) =>
+      Array.from({ length: 50 }, (_, i) => {
+        const params = kind.generate(i * 104729 + level, level);
+        return { kind, params, parts: kind.parts(params), texts: Object.fromEntries(kind.parts(params).map((p) => [p.key, p.answer === "count" ? "7" : roundedAnswer(kind.solve(params)[p.key], p.precision).add(1, 8).toFraction(true)])) };
+      }),
+    ),
+  );
+  let parts = 0;
+  const start = performance.now();
+  while (performance.now() - start < MEASURE_MS) {
+    for (const c of cases) {
+      const expected = c.kind.solve(c.params);
+      for (const part of c.parts) {
+        gradeAnswer(part, expected[part.key], c.texts[part.key], (v) => c.kind.diagnose(c.params, part.key, v));
+        parts++;
+      }
+    }
+  }
+  return (parts / (performance.now() - start)) * 1000;
+}
+
+async function http() {
+  const app = await startApp({ seed: false, env: { ANSWERS_PER_MINUTE: "100000000" } });
+  try {
+    // Problems written straight into the database (as the route would), owned by one visitor,
+    // so every request is a real graded try that stays open (wrong answers, at most two per problem).
+    const visitorId = randomUUID();
+    const database = openDatabase(app.databasePath);
+    const kind = PROBLEM_KINDS.find((k) => k.key === "even-gap") ?? PROBLEM_KINDS[0];
+    const problems = Array.from({ length: 3000 }, (_, i) => ({ id: randomUUID(), userId: null, visitorId, kind: kind.key, level: 2, seed: i, attemptsAllowed: 3 }));
+    await database.models.PracticeProblem.bulkCreate(problems);
+    await database.sequelize.close();
+    const bodies = problems.map((p) => JSON.stringify({ answers: Object.fromEntries(kind.parts(kind.generate(p.seed, 2)).map((part) => [part.key, part.answer === "count" ? "1" : "1 1/16"])) }));
+
+    const run = (opts: autocannon.Options) => new Promise<autocannon.Result>((resolve, reject) => autocannon({ connections: 8, ...opts }, (err, result) => (err ? reject(err) : resolve(result))));
+    await run({ url: `${app.url}/api/health`, duration: 2 }); // warm up
+    const health = await run({ url: `${app.url}/api/health`, duration: 5 });
+    let n = 0;
+    const answers = await run({
+      url: app.url,
+      amount: 5000,
+      requests: [
+        {
+          method: "POST",
+          headers: { "content-type": "application/json", cookie: `sixteenths-visitor=${visitorId}` },
+          setupRequest: (req) => {
+            const i = n++ % problems.length;
+            return { ...req, path: `/api/practice/${problems[i].id}/answers`, body: bodies[i] };
+          },
+        },
+      ],
+    });
+    const ok = answers["2xx"];
+    return { health: health.requests.average, answers: answers.requests.average, ok, non2xx: answers.non2xx, p99: answers.latency.p99 };
+  } finally {
+    await app.stop();
+  }
+}
+
+async function main() {
+  const perSecond = gradingMix();
+  console.log(`Grading in process: ${Math.round(perSecond).toLocaleString("en-US")} graded parts / s over ${PROBLEM_KINDS.length} kinds (target ≥ 10,000)`);
+  const h = await http();
+  console.log(`GET /api/health:                 ${Math.round(h.health)} req/s`);
+  console.log(`POST /api/practice/{id}/answers: ${Math.round(h.answers)} req/s (${h.ok} graded and stored, ${h.non2xx} not 2xx, p99 ${h.p99} ms)`);
+  console.log(`Ratio answers / health: ${(h.answers / h.health).toFixed(2)} (target ≥ 0.5)`);
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
