@@ -6,7 +6,9 @@ export function MasteryMeter({ skill }: { skill: SkillMastery }) {
   const current = skill.levels[skill.currentLevel - 1];
   const summary = skill.mastered
     ? "all three levels mastered"
-    : `level ${skill.currentLevel}: ${current.solvedOfLastFive} of the last ${Math.min(5, current.finished)} solved (${MASTERY_NEEDED} of 5 masters it)`;
+    : current.finished === 0
+      ? `level ${skill.currentLevel}: none finished yet`
+      : `level ${skill.currentLevel}: ${current.solvedOfLastFive} of the last ${Math.min(5, current.finished)} solved (${MASTERY_NEEDED} of 5 masters it)`;
   return (
     <p className="flex items-center gap-2 text-sm text-ink-soft" data-mastery={skill.skill}>
       <span className="flex gap-1" aria-hidden="true">

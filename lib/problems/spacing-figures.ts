@@ -66,9 +66,9 @@ export const NUMBER_WORDS: readonly string[] = WORDS;
 
 export function levelInfo(descriptions: [string, string, string]): readonly LevelInfo[] {
   return [
-    { level: 1, label: "Level 1", description: descriptions[0] },
-    { level: 2, label: "Level 2", description: descriptions[1] },
-    { level: 3, label: "Level 3", description: descriptions[2] },
+    { level: 1, label: "Eighths", description: descriptions[0] },
+    { level: 2, label: "Sixteenths", description: descriptions[1] },
+    { level: 3, label: "Thirty-seconds", description: descriptions[2] },
   ];
 }
 
