@@ -7,8 +7,10 @@
  *   npm run bench:page-js -- --nomodule         # also count the legacy-browser polyfills
  *
  * It starts nothing: it reads the prerendered `.html` files under `<distDir>/server/app`, takes every
- * `<script src>` the browser would fetch and sums their sizes gzipped with node:zlib at its default
- * level (what a compressing server sends). `nomodule` scripts (Next's polyfills, ≈39 KB gzipped on
+ * script the page makes the browser fetch — each `<script src>`, and each `<link rel="preload"
+ * as="script">`, which is how next/dynamic names the chunks a server-rendered lazy component needs
+ * to hydrate — and sums their sizes gzipped with node:zlib at its default level (what a compressing
+ * server sends). `nomodule` scripts (Next's polyfills, ≈39 KB gzipped on
  * every page) are left out unless asked for: a browser that runs modules never downloads them.
  */
 import fs from "node:fs";
@@ -43,6 +45,11 @@ function scriptSources(html: string, withNomodule: boolean): string[] {
     if (!withNomodule && /\bnomodule\b/i.test(tag)) continue;
     const src = /\bsrc="([^"]+)"/i.exec(tag)?.[1];
     if (src) sources.add(src);
+  }
+  for (const [tag] of html.matchAll(/<link\b[^>]*>/gi)) {
+    if (!/\brel="preload"/i.test(tag) || !/\bas="script"/i.test(tag)) continue;
+    const href = /\bhref="([^"]+)"/i.exec(tag)?.[1];
+    if (href) sources.add(href);
   }
   return [...sources];
 }

@@ -11,6 +11,17 @@ const slugs = fs
   .filter((f) => /^\d{2}-.*\.mdx$/.test(f))
   .map((f) => f.replace(/^\d{2}-/, "").replace(/\.mdx$/, ""));
 
+/** The JavaScript a page makes the browser fetch on first load, next/dynamic's preloaded chunks included. */
+async function pageScripts(route: string): Promise<string> {
+  const html = await (await fetch(`${baseURL}${route}`)).text();
+  const sources = new Set([
+    ...[...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]),
+    ...[...html.matchAll(/<link(?=[^>]*rel="preload")(?=[^>]*as="script")[^>]*href="([^"]+)"/g)].map((m) => m[1]),
+  ]);
+  const bodies = await Promise.all([...sources].map(async (src) => (await fetch(`${baseURL}${src}`)).text()));
+  return bodies.join("\n");
+}
+
 describe("lessons", () => {
   it("has at least ten lessons", () => {
     expect(slugs.length).toBeGreaterThanOrEqual(10);
@@ -31,6 +42,16 @@ describe("lessons", () => {
       const js = await (await fetch(`${baseURL}${src}`)).text();
       expect(js, src).not.toMatch(/renderToString|KaTeX parse error/);
     }
+  });
+
+  it("loads only the calculators a lesson shows", async () => {
+    // Labels that only the stair and even-spacing calculators carry. The stair lesson proves the label
+    // reaches the browser at all; the tape lesson embeds neither calculator, so it must not fetch them.
+    const stairs = await pageScripts("/lessons/stair-layout");
+    expect(stairs).toContain("Total rise");
+    const tape = await pageScripts("/lessons/reading-a-tape");
+    expect(tape).not.toContain("Total rise");
+    expect(tape).not.toContain("Number of members");
   });
 
   it("answers a real 404 for an unknown lesson", async () => {
