@@ -1,16 +1,18 @@
 import type { MDXComponents } from "mdx/types";
 import type { ComponentProps } from "react";
-import { CutListCalculator } from "@/components/calculators/cut-list-calculator";
-import { EvenSpacingCalculator } from "@/components/calculators/even-spacing-calculator";
-import { FractionBench } from "@/components/calculators/fraction-bench";
-import { GuardSpacingCalculator } from "@/components/calculators/guard-spacing-calculator";
-import { StairCalculator } from "@/components/calculators/stair-calculator";
-import { TapeReading } from "@/components/calculators/tape-reading";
-import { WallGridCalculator } from "@/components/calculators/wall-grid-calculator";
 import { Caution, Figure, H2, H3, Note, Practice } from "@/components/lessons/blocks";
+import {
+  LessonCutListCalculator,
+  LessonEvenSpacingCalculator,
+  LessonFractionBench,
+  LessonGuardSpacingCalculator,
+  LessonStairCalculator,
+  LessonTapeReading,
+  LessonWallGridCalculator,
+} from "@/components/lessons/lesson-calculators";
 import { WorkedExample } from "@/components/lessons/worked-example";
 
-// Calculators in a lesson run compact and keep their state to themselves (several share a page).
+// Calculators come through lesson-calculators.tsx so that a lesson loads only the ones it shows.
 const components: MDXComponents = {
   h2: H2,
   h3: H3,
@@ -29,13 +31,13 @@ const components: MDXComponents = {
   Figure,
   Practice,
   WorkedExample,
-  TapeReading: (props: ComponentProps<typeof TapeReading>) => <TapeReading compact {...props} />,
-  EvenSpacingCalculator: (props: ComponentProps<typeof EvenSpacingCalculator>) => <EvenSpacingCalculator compact {...props} />,
-  WallGridCalculator: (props: ComponentProps<typeof WallGridCalculator>) => <WallGridCalculator compact {...props} />,
-  CutListCalculator: (props: ComponentProps<typeof CutListCalculator>) => <CutListCalculator compact {...props} />,
-  GuardSpacingCalculator: (props: ComponentProps<typeof GuardSpacingCalculator>) => <GuardSpacingCalculator compact {...props} />,
-  StairCalculator: (props: ComponentProps<typeof StairCalculator>) => <StairCalculator compact {...props} />,
-  FractionBench: (props: ComponentProps<typeof FractionBench>) => <FractionBench compact {...props} />,
+  TapeReading: LessonTapeReading,
+  FractionBench: LessonFractionBench,
+  EvenSpacingCalculator: LessonEvenSpacingCalculator,
+  WallGridCalculator: LessonWallGridCalculator,
+  CutListCalculator: LessonCutListCalculator,
+  GuardSpacingCalculator: LessonGuardSpacingCalculator,
+  StairCalculator: LessonStairCalculator,
 };
 
 export function useMDXComponents(): MDXComponents {

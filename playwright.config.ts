@@ -22,6 +22,6 @@ export default defineConfig({
   },
   projects: [
     { name: "desktop", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 800 }, launchOptions: chromium } },
-    { name: "phone", use: { viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, launchOptions: chromium }, testMatch: /shell\.spec\.ts/ },
+    { name: "phone", use: { viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, launchOptions: chromium }, testMatch: /(shell|lessons)\.spec\.ts/ },
   ],
 });

@@ -6,7 +6,7 @@ test("a reader opens the outline, a lesson, and works its embedded calculator", 
   await page.goto("/lessons");
   await expect(page.getByRole("heading", { name: "Lessons", level: 1 })).toBeVisible();
   await page.getByRole("link", { name: /Even spacing/ }).first().click();
-  await expect(page.getByRole("navigation", { name: "In this lesson" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: /Even spacing/, level: 1 })).toBeVisible();
   const calculator = page.getByRole("region", { name: "Even spacing calculator" }).first();
   await expect(calculator).toBeVisible();
   const count = calculator.getByLabel("Number of members");
@@ -25,8 +25,9 @@ test("an anonymous reader is invited to sign up to keep progress", async ({ page
   await expect(page.getByText("to mark lessons complete and keep your progress")).toBeVisible();
 });
 
-test("a student marks a lesson complete and sees it in the outline after a reload", async ({ page }) => {
-  const student = DEMO_STUDENTS[9];
+test("a student marks a lesson complete and sees it in the outline after a reload", async ({ page }, testInfo) => {
+  // Each project gets its own student: the lesson stays completed in the shared test database.
+  const student = testInfo.project.name === "phone" ? DEMO_STUDENTS[8] : DEMO_STUDENTS[9];
   await signIn(page, student.email);
   await expectSignedInAs(page, student.name);
   await page.goto("/lessons/even-spacing");
@@ -49,5 +50,58 @@ test("a lesson prints without the site chrome or the table of contents", async (
   await page.emulateMedia({ media: "print" });
   await expect(page.locator("header[data-chrome]")).toBeHidden();
   await expect(page.getByText("In this lesson")).toBeHidden();
+  await expect(page.getByText("On this page")).toBeHidden();
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
+});
+
+test("lesson math is set by KaTeX's stylesheet: the MathML copy is for screen readers only", async ({ page }) => {
+  await page.goto("/lessons/even-spacing");
+  const formula = page.locator(".katex-display").first();
+  await expect(formula).toBeVisible();
+  // Without the stylesheet the MathML copy shows beside the typeset formula as a second, plain-text one.
+  await expect(formula.locator(".katex-mathml")).toHaveCSS("clip", "rect(1px, 1px, 1px, 1px)");
+  await expect(formula.locator(".katex-html")).toHaveCSS("display", "block");
+});
+
+test("on a desktop the table of contents is a side column that stays in view", async ({ page }, testInfo) => {
+  test.skip(testInfo.project.name === "phone", "the side column starts at the lg breakpoint");
+  await page.goto("/lessons/board-and-batten-wall");
+  const toc = page.getByRole("navigation", { name: "In this lesson" });
+  await expect(toc).toBeVisible();
+  await expect(page.getByText("On this page")).toBeHidden();
+  await toc.getByRole("link", { name: "Order of installation" }).click();
+  await expect(page).toHaveURL(/#order-of-installation$/);
+  await expect(page.getByRole("heading", { name: "Order of installation", level: 2 })).toBeInViewport();
+  await expect(toc).toBeInViewport();
+});
+
+test("on a phone the table of contents folds under the lesson header and its links jump", async ({ page }, testInfo) => {
+  test.skip(testInfo.project.name !== "phone", "the folded list is for screens below the lg breakpoint");
+  await page.goto("/lessons/board-and-batten-wall");
+  await expect(page.getByRole("navigation", { name: "In this lesson" })).toBeHidden();
+  const summary = page.locator("summary", { hasText: "On this page" });
+  const title = page.getByRole("heading", { level: 1 });
+  // The title and summary come first; the folded list sits under them, above the lesson text.
+  const [titleBox, summaryBox, objectivesBox] = await Promise.all([title.boundingBox(), summary.boundingBox(), page.getByRole("heading", { name: "Objectives" }).boundingBox()]);
+  expect(summaryBox!.y).toBeGreaterThan(titleBox!.y + titleBox!.height);
+  expect(summaryBox!.y).toBeLessThan(objectivesBox!.y);
+
+  const toc = page.getByRole("navigation", { name: "On this page" });
+  await expect(toc).toBeHidden();
+  // Keyboard: the summary takes focus and Enter opens it; Tab reaches the first link.
+  await summary.focus();
+  await page.keyboard.press("Enter");
+  await expect(toc).toBeVisible();
+  await page.keyboard.press("Tab");
+  await expect(toc.getByRole("link", { name: "Objectives" })).toBeFocused();
+
+  await toc.getByRole("link", { name: "Order of installation" }).tap();
+  await expect(page).toHaveURL(/#order-of-installation$/);
+  await expect(page.getByRole("heading", { name: "Order of installation", level: 2 })).toBeInViewport();
+  await expect(summary).not.toBeInViewport();
+
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await toc.getByRole("link", { name: "Sources" }).tap();
+  await expect(page).toHaveURL(/#sources$/);
+  await expect(page.getByRole("heading", { name: "Sources", level: 2 })).toBeInViewport();
 });

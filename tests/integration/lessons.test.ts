@@ -11,6 +11,17 @@ const slugs = fs
   .filter((f) => /^\d{2}-.*\.mdx$/.test(f))
   .map((f) => f.replace(/^\d{2}-/, "").replace(/\.mdx$/, ""));
 
+/** The JavaScript a page makes the browser fetch on first load, next/dynamic's preloaded chunks included. */
+async function pageScripts(route: string): Promise<string> {
+  const html = await (await fetch(`${baseURL}${route}`)).text();
+  const sources = new Set([
+    ...[...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]),
+    ...[...html.matchAll(/<link(?=[^>]*rel="preload")(?=[^>]*as="script")[^>]*href="([^"]+)"/g)].map((m) => m[1]),
+  ]);
+  const bodies = await Promise.all([...sources].map(async (src) => (await fetch(`${baseURL}${src}`)).text()));
+  return bodies.join("\n");
+}
+
 describe("lessons", () => {
   it("has at least ten lessons", () => {
     expect(slugs.length).toBeGreaterThanOrEqual(10);
@@ -23,6 +34,16 @@ describe("lessons", () => {
     expect(html).toContain("<h1");
   });
 
+  it.each(slugs)("%s sets its $$ formulas as display math, not inline", (slug) => {
+    const file = fs.readdirSync(path.join(process.cwd(), "content/lessons")).find((f) => f.endsWith(`-${slug}.mdx`))!;
+    const source = fs.readFileSync(path.join(process.cwd(), "content/lessons", file), "utf8");
+    // Written on one line, $$…$$ is inline math to remark-math: text-size fractions that wrap on a phone.
+    expect(source).not.toMatch(/^\$\$\S.*\$\$\s*$/m);
+    const fences = source.match(/^\$\$\s*$/gm)?.length ?? 0;
+    const html = fs.readFileSync(path.join(distDir, "server/app/lessons", `${slug}.html`), "utf8");
+    expect(html.split('class="katex-display"').length - 1).toBe(fences / 2);
+  });
+
   it("sends no KaTeX code to the reader", async () => {
     const html = await (await fetch(`${baseURL}/lessons/${slugs[0]}`)).text();
     const scripts = [...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]);
@@ -31,6 +52,16 @@ describe("lessons", () => {
       const js = await (await fetch(`${baseURL}${src}`)).text();
       expect(js, src).not.toMatch(/renderToString|KaTeX parse error/);
     }
+  });
+
+  it("loads only the calculators a lesson shows", async () => {
+    // Labels that only the stair and even-spacing calculators carry. The stair lesson proves the label
+    // reaches the browser at all; the tape lesson embeds neither calculator, so it must not fetch them.
+    const stairs = await pageScripts("/lessons/stair-layout");
+    expect(stairs).toContain("Total rise");
+    const tape = await pageScripts("/lessons/reading-a-tape");
+    expect(tape).not.toContain("Total rise");
+    expect(tape).not.toContain("Number of members");
   });
 
   it("answers a real 404 for an unknown lesson", async () => {

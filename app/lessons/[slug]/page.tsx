@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { LessonTocDisclosure, LessonTocSidebar } from "@/components/lessons/lesson-toc";
 import { LessonProgressControls } from "@/components/lessons/progress-client";
 import { findLesson, lessonFiles, lessonHeadings } from "@/lib/lessons/catalog";
 import { courseOutline, loadLesson } from "@/lib/lessons/load";
@@ -42,6 +43,7 @@ export default async function LessonPage({ params }: PageProps<"/lessons/[slug]"
             Lesson {metadata.order} of {outline.length} · about {metadata.minutes} minutes
           </p>
         </header>
+        <LessonTocDisclosure headings={headings} />
         <div className="lesson-body mt-6 overflow-x-clip space-y-4 leading-relaxed [&_li]:my-1 [&_ol]:list-decimal [&_ol]:pl-6 [&_ul]:list-disc [&_ul]:pl-6">
           <Content />
         </div>
@@ -74,23 +76,7 @@ export default async function LessonPage({ params }: PageProps<"/lessons/[slug]"
           ) : null}
         </nav>
       </article>
-      <aside data-chrome className="order-first lg:order-none">
-        <nav aria-labelledby="toc-title" className="card p-4 lg:sticky lg:top-4">
-          <p id="toc-title" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-faint">
-            In this lesson
-          </p>
-          <ol className="space-y-1 text-sm">
-            {headings.map((h) => (
-              <li key={h.id} className={h.depth === 3 ? "pl-4" : ""}>
-                <a href={`#${h.id}`}>{h.text}</a>
-              </li>
-            ))}
-            <li>
-              <a href="#sources">Sources</a>
-            </li>
-          </ol>
-        </nav>
-      </aside>
+      <LessonTocSidebar headings={headings} />
     </div>
   );
 }
