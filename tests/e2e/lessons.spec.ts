@@ -54,6 +54,16 @@ test("a lesson prints without the site chrome or the table of contents", async (
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
 });
 
+test("lesson math is set by KaTeX's stylesheet: the MathML copy is for screen readers only", async ({ page }) => {
+  await page.goto("/lessons/even-spacing");
+  const formula = page.locator(".katex-display").first();
+  await expect(formula).toBeVisible();
+  // Without the stylesheet the MathML copy shows beside the typeset formula as a second, plain-text one.
+  await expect(formula.locator(".katex-mathml")).toHaveCSS("position", "absolute");
+  await expect(formula.locator(".katex-mathml")).toHaveCSS("clip-path", "inset(50%)");
+  await expect(formula.locator(".katex-html")).toHaveCSS("display", "block");
+});
+
 test("on a desktop the table of contents is a side column that stays in view", async ({ page }, testInfo) => {
   test.skip(testInfo.project.name === "phone", "the side column starts at the lg breakpoint");
   await page.goto("/lessons/board-and-batten-wall");

@@ -34,6 +34,16 @@ describe("lessons", () => {
     expect(html).toContain("<h1");
   });
 
+  it.each(slugs)("%s sets its $$ formulas as display math, not inline", (slug) => {
+    const file = fs.readdirSync(path.join(process.cwd(), "content/lessons")).find((f) => f.endsWith(`-${slug}.mdx`))!;
+    const source = fs.readFileSync(path.join(process.cwd(), "content/lessons", file), "utf8");
+    // Written on one line, $$…$$ is inline math to remark-math: text-size fractions that wrap on a phone.
+    expect(source).not.toMatch(/^\$\$\S.*\$\$\s*$/m);
+    const fences = source.match(/^\$\$\s*$/gm)?.length ?? 0;
+    const html = fs.readFileSync(path.join(distDir, "server/app/lessons", `${slug}.html`), "utf8");
+    expect(html.split('class="katex-display"').length - 1).toBe(fences / 2);
+  });
+
   it("sends no KaTeX code to the reader", async () => {
     const html = await (await fetch(`${baseURL}/lessons/${slugs[0]}`)).text();
     const scripts = [...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]);
