@@ -108,6 +108,20 @@ describe("lesson progress", () => {
     expect((await (await fetch(`${baseURL}/api/progress`, { headers: { cookie: other } })).json()).progress).toEqual({});
   });
 
+  it("keeps both of two writes that race for a lesson not yet started", async () => {
+    // A quick reader can press "Mark lesson complete" while the page is still recording "opened".
+    const cookie = (await signInCookie(baseURL, DEMO_STUDENTS[5].email, DEMO_PASSWORD))!;
+    const post = (lesson: string, status: string) =>
+      fetch(`${baseURL}/api/progress`, { method: "POST", headers: { cookie, "content-type": "application/json" }, body: JSON.stringify({ slug: lesson, status }) });
+    for (const lesson of slugs) {
+      const [opened, completed] = await Promise.all([post(lesson, "opened"), post(lesson, "completed")]);
+      expect([lesson, opened.status, completed.status]).toEqual([lesson, 200, 200]);
+      expect((await completed.json()).status).toBe("completed");
+    }
+    const { progress } = await (await fetch(`${baseURL}/api/progress`, { headers: { cookie } })).json();
+    expect(Object.values(progress)).toEqual(slugs.map(() => "completed"));
+  });
+
   it("rejects an unknown lesson and a status the reader may not set", async () => {
     const cookie = (await signInCookie(baseURL, DEMO_STUDENTS[8].email, DEMO_PASSWORD))!;
     const post = (body: unknown) =>
