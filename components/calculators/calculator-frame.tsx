@@ -29,7 +29,7 @@ type Props = {
 export function CalculatorFrame({ kind, title, inputs, results, query, compact = false, signedIn = false, sheetSummary }: Props) {
   const hydrated = useHydrated();
   return (
-    <section aria-label={`${title} calculator`} className={compact ? "card my-6 space-y-4 p-4" : "space-y-4"} data-calculator={kind}>
+    <section aria-label={`${title} calculator`} className={compact ? "card @container my-6 space-y-4 p-4" : "space-y-4"} data-calculator={kind}>
       <div className="hidden print:block">
         <p className="text-xs uppercase tracking-wide">Sixteenths shop sheet · {title}</p>
         <p className="measure text-sm">{sheetSummary}</p>
@@ -41,8 +41,10 @@ export function CalculatorFrame({ kind, title, inputs, results, query, compact =
           <SaveLayoutButton kind={kind} query={query} signedIn={signedIn} />
         </div>
       )}
-      <div className={compact ? "grid gap-4 md:grid-cols-[minmax(0,18rem)_1fr] print:block" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr] print:block"}>
-        <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} aria-label={`${title} inputs`}>
+      {/* A compact calculator sits in a lesson's text column, narrower than any screen it is shown on:
+          it goes side by side only when its own box has room for the results' tables and readouts. */}
+      <div className={compact ? "grid gap-4 @3xl:grid-cols-[minmax(0,18rem)_1fr] print:block" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr] print:block"}>
+        <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} aria-label={`${title} inputs`} className={compact ? "max-w-md @3xl:max-w-none" : undefined}>
           <fieldset disabled={!hydrated} className="min-w-0 space-y-3">
             {inputs}
           </fieldset>

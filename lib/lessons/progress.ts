@@ -1,3 +1,4 @@
+import { Transaction } from "sequelize";
 import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
@@ -17,7 +18,11 @@ export async function recordProgress(user: SessionUser, slug: string, status: Pr
   if (!knownSlugs.includes(slug)) throw new AppError("not_found", "There is no lesson with that name.", { slug: "There is no lesson with that name." });
   const { LessonProgress } = db().models;
   const now = new Date();
-  return db().sequelize.transaction(async (transaction) => {
+  // IMMEDIATE takes SQLite's write lock up front. A deferred transaction reads first and upgrades
+  // later, and two of those racing for the same new row (the page recording "opened" while the
+  // reader presses "Mark lesson complete") deadlock: one fails at once with SQLITE_BUSY, which the
+  // busy timeout cannot wait out. Taken up front, the second simply queues behind the first.
+  return db().sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const [row, created] = await LessonProgress.findOrCreate({
       where: { userId: user.id, lessonSlug: slug },
       defaults: { userId: user.id, lessonSlug: slug, status, openedAt: now, completedAt: status === "opened" ? null : now },

@@ -44,7 +44,8 @@ export default async function LessonPage({ params }: PageProps<"/lessons/[slug]"
           </p>
         </header>
         <LessonTocDisclosure headings={headings} />
-        <div className="lesson-body mt-6 overflow-x-clip space-y-4 leading-relaxed [&_li]:my-1 [&_ol]:list-decimal [&_ol]:pl-6 [&_ul]:list-disc [&_ul]:pl-6">
+        {/* Markdown's own lists carry no class; a calculator's lists style themselves and must not gain bullets. */}
+        <div className="lesson-body mt-6 overflow-x-clip space-y-4 leading-relaxed [&_ol:not([class])]:list-decimal [&_ol:not([class])]:pl-6 [&_ul:not([class])]:list-disc [&_ul:not([class])]:pl-6 [&_:is(ol,ul):not([class])>li]:my-1">
           <Content />
         </div>
         <section aria-labelledby="sources" className="mt-10 border-t border-rule pt-4">
