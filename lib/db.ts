@@ -40,3 +40,15 @@ export function db(): Database {
   holder.__sixteenthsDb ??= openDatabase(env().DATABASE_PATH);
   return holder.__sixteenthsDb;
 }
+
+// SQLite lets one writer in at a time, and Sequelize gives each transaction its own connection,
+// so concurrent transactions from this process would wait on the busy timeout's sleep-and-retry.
+// Queuing them here instead hands the lock straight from one to the next.
+let writeQueue: Promise<unknown> = Promise.resolve();
+
+/** Runs `work` (which opens its own transaction) after every earlier queued write has finished. */
+export function queuedWrite<T>(work: () => Promise<T>): Promise<T> {
+  const run = writeQueue.then(work, work);
+  writeQueue = run.catch(() => undefined);
+  return run;
+}

@@ -1,6 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
-import { db } from "@/lib/db";
+import { Transaction } from "sequelize";
+import { db, queuedWrite } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
 import { gradeValue, readAnswer, type PartGrade } from "@/lib/grading/grade";
@@ -117,7 +118,9 @@ export async function submitAnswers(owner: PracticeOwner, id: string, submission
   const used = problem.attemptsUsed + 1;
   const status = solved ? "solved" : used >= problem.attemptsAllowed ? "failed" : "open";
   const { sequelize, models } = db();
-  await sequelize.transaction(async (transaction) => {
+  // IMMEDIATE takes the write lock at BEGIN, so a try can never fail to upgrade a read lock;
+  // the queue keeps this process's own tries from waiting on each other's locks.
+  await queuedWrite(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const [count] = await models.PracticeProblem.update(
       { attemptsUsed: used, status, finishedAt: status === "open" ? null : new Date() },
       { where: { id, status: "open", attemptsUsed: problem.attemptsUsed }, transaction },
@@ -141,7 +144,7 @@ export async function submitAnswers(owner: PracticeOwner, id: string, submission
       })),
       { transaction },
     );
-  });
+  }));
   if (solved && owner.user && lessonSlugs().includes(kind.lesson.slug)) {
     await recordProgress(owner.user, kind.lesson.slug, "practised", lessonSlugs());
   }
