@@ -1,7 +1,8 @@
 // Grading one answer box: read the student's text, compare it with the exact expected value,
 // and name the slip. Pure, so the unit tests and the benchmark run it without a server; the
 // API is the only caller that ever holds expected values next to a student.
-import { formatMeasure, Fraction, parseMeasure } from "@/lib/layout";
+import { Fraction } from "@/lib/layout/core";
+import { formatMeasure, parseMeasure } from "@/lib/layout/measure";
 import { ERROR_PATTERNS, type ErrorPattern } from "@/lib/problems/patterns";
 import { roundingSlip } from "@/lib/problems/kit";
 import type { ProblemPart } from "@/lib/problems/types";

@@ -1,6 +1,7 @@
 // Small shared pieces for writing problem kinds: precision by level, measurement text, and the
 // rounding slips every kind can show.
-import { formatMeasure, Fraction, roundTo } from "@/lib/layout";
+import { Fraction, roundTo } from "@/lib/layout/core";
+import { formatMeasure } from "@/lib/layout/measure";
 import type { ErrorPattern } from "./patterns";
 import type { Level as ProblemLevel } from "./types";
 

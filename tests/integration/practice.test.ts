@@ -105,7 +105,7 @@ describe("practice problems", () => {
   });
 
   it("no answer leaves the server before the problem is final; then the answers and the worked solution do", async () => {
-    const student = client((await signInCookie(baseURL, DEMO_STUDENTS[5].email, DEMO_PASSWORD))!);
+    const student = client((await signInCookie(baseURL, DEMO_STUDENTS[14].email, DEMO_PASSWORD))!);
     const id = await newPinnedProblem(student);
     const { right, wrong, leaks } = expectedFor(1);
     const before: string[] = [JSON.stringify(await (await student.call(`/api/practice/${id}`)).json())];
