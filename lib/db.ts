@@ -7,6 +7,8 @@ import { env } from "@/lib/env";
 
 export type Database = { sequelize: Sequelize; models: Models };
 
+export const CONNECTION_PRAGMAS = ["PRAGMA journal_mode = WAL", "PRAGMA busy_timeout = 5000", "PRAGMA foreign_keys = ON"];
+
 /**
  * Opens a SQLite file with the settings every connection needs: WAL so readers never
  * wait for the writer, a busy timeout so concurrent writers queue instead of failing,
@@ -24,7 +26,7 @@ export function openDatabase(storage: string): Database {
     hooks: {
       afterConnect: async (connection) => {
         const db = connection as unknown as sqlite3.Database;
-        for (const pragma of ["PRAGMA journal_mode = WAL", "PRAGMA busy_timeout = 5000", "PRAGMA foreign_keys = ON"]) {
+        for (const pragma of CONNECTION_PRAGMAS) {
           await new Promise<void>((resolve, reject) => db.run(pragma, (err) => (err ? reject(err) : resolve())));
         }
       },
@@ -41,14 +43,3 @@ export function db(): Database {
   return holder.__sixteenthsDb;
 }
 
-// SQLite lets one writer in at a time, and Sequelize gives each transaction its own connection,
-// so concurrent transactions from this process would wait on the busy timeout's sleep-and-retry.
-// Queuing them here instead hands the lock straight from one to the next.
-let writeQueue: Promise<unknown> = Promise.resolve();
-
-/** Runs `work` (which opens its own transaction) after every earlier queued write has finished. */
-export function queuedWrite<T>(work: () => Promise<T>): Promise<T> {
-  const run = writeQueue.then(work, work);
-  writeQueue = run.catch(() => undefined);
-  return run;
-}

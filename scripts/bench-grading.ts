@@ -1,7 +1,8 @@
 // Speed of grading, side by side in one run. In process: graded parts per second over a mix of
 // every problem kind (parse, solve, compare, diagnose — what the answer route does besides the
 // database). Over HTTP, with the built app on loopback: the answer route beside GET /api/health
-// on the same server, driven by autocannon from this second process, as a ratio.
+// on the same server, driven by autocannon from this second process, as a ratio. Every answer is
+// a first try at a fresh problem of one of the kinds and levels, opened beforehand as a student would.
 // It only prints; nothing here passes or fails.
 //
 //   npm run build && npx tsx scripts/bench-grading.ts
@@ -42,35 +43,60 @@ function gradingMix() {
 async function http() {
   const app = await startApp({ seed: false, env: { ANSWERS_PER_MINUTE: "100000000" } });
   try {
-    // Problems written straight into the database (as the route would), owned by one visitor,
-    // so every request is a real graded try that stays open (wrong answers, at most two per problem).
+    // Problems of every kind and level, written straight into the database (as the route would)
+    // and owned by one visitor, so every request is a real graded try of a fresh open problem.
     const visitorId = randomUUID();
     const database = openDatabase(app.databasePath);
-    const kind = PROBLEM_KINDS.find((k) => k.key === "even-gap") ?? PROBLEM_KINDS[0];
-    const problems = Array.from({ length: 3000 }, (_, i) => ({ id: randomUUID(), userId: null, visitorId, kind: kind.key, level: 2, seed: i, attemptsAllowed: 3 }));
+    const problems = Array.from({ length: 6000 }, (_, i) => {
+      const kind = PROBLEM_KINDS[i % PROBLEM_KINDS.length];
+      const level = LEVELS[Math.floor(i / PROBLEM_KINDS.length) % LEVELS.length];
+      return { id: randomUUID(), userId: null, visitorId, kind: kind.key, level, seed: i, attemptsAllowed: 3 };
+    });
     await database.models.PracticeProblem.bulkCreate(problems);
     await database.sequelize.close();
-    const bodies = problems.map((p) => JSON.stringify({ answers: Object.fromEntries(kind.parts(kind.generate(p.seed, 2)).map((part) => [part.key, part.answer === "count" ? "1" : "1 1/16"])) }));
+    const bodies = problems.map((p) => {
+      const kind = PROBLEM_KINDS.find((k) => k.key === p.kind)!;
+      return JSON.stringify({ answers: Object.fromEntries(kind.parts(kind.generate(p.seed, p.level)).map((part) => [part.key, part.answer === "count" ? "1" : "1 1/16"])) });
+    });
 
-    const run = (opts: autocannon.Options) => new Promise<autocannon.Result>((resolve, reject) => autocannon({ connections: 8, ...opts }, (err, result) => (err ? reject(err) : resolve(result))));
+    // A student opens a problem before answering it (the problem page, or a lesson's embed), so
+    // the problems to be answered are opened first, outside the timed runs.
+    const opened = problems.slice(0, 4000);
+    const open = async (id: string, tries = 3): Promise<void> => {
+      try {
+        const res = await fetch(`${app.url}/api/practice/${id}`, { headers: { cookie: `sixteenths-visitor=${visitorId}` } });
+        if (!res.ok) throw new Error(`GET ${id}: ${res.status}`);
+        await res.text();
+      } catch (error) {
+        // A kept-alive socket the server has just closed fails once; a fresh one does not.
+        if (tries <= 1) throw error;
+        await open(id, tries - 1);
+      }
+    };
+    for (let i = 0; i < opened.length; i += 16) await Promise.all(opened.slice(i, i + 16).map((p) => open(p.id)));
+
+    const run = (opts: autocannon.Options) => new Promise<autocannon.Result>((resolve, reject) => autocannon({ connections: 32, ...opts }, (err, result) => (err ? reject(err) : resolve(result))));
     await run({ url: `${app.url}/api/health`, duration: 2 }); // warm up the server before either figure is taken
     const health = await run({ url: `${app.url}/api/health`, duration: 5 });
     let n = 0;
-    const answers = await run({
-      url: app.url,
-      // Both runs are time-boxed alike; each request goes to the next of 3,000 open problems.
-      duration: 5,
-      requests: [
-        {
-          method: "POST",
-          headers: { "content-type": "application/json", cookie: `sixteenths-visitor=${visitorId}` },
-          setupRequest: (req) => {
-            const i = n++ % problems.length;
-            return { ...req, path: `/api/practice/${problems[i].id}/answers`, body: bodies[i] };
+    const answerRun = (duration: number) =>
+      run({
+        url: app.url,
+        // Both runs are time-boxed alike; each request goes to the next open problem, never the same one twice.
+        duration,
+        requests: [
+          {
+            method: "POST",
+            headers: { "content-type": "application/json", cookie: `sixteenths-visitor=${visitorId}` },
+            setupRequest: (req) => {
+              const i = n++ % opened.length;
+              return { ...req, path: `/api/practice/${problems[i].id}/answers`, body: bodies[i] };
+            },
           },
-        },
-      ],
-    });
+        ],
+      });
+    await answerRun(1); // loads the route's code, as the health warm-up does for its own
+    const answers = await answerRun(5);
     const ok = answers["2xx"];
     return { health: health.requests.average, answers: answers.requests.average, ok, non2xx: answers.non2xx, p99: answers.latency.p99, statuses: answers.statusCodeStats };
   } finally {

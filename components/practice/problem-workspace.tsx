@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useEffect, useRef, useState } from "react";
 import type { ErrorBody } from "@/lib/errors";
-import type { ProblemView } from "@/lib/practice/view";
+import type { ProblemUpdate, ProblemView } from "@/lib/practice/view";
 import { Alert } from "@/components/ui/alert";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { AnswerField } from "./answer-field";
@@ -17,7 +17,7 @@ type Props = {
   headingLevel?: "h1" | "h2";
 };
 
-async function postJson(url: string, body: unknown): Promise<{ ok: true; problem: ProblemView } | { ok: false; error: ErrorBody["error"] }> {
+async function postJson<T>(url: string, body: unknown): Promise<{ ok: true; problem: T } | { ok: false; error: ErrorBody["error"] }> {
   try {
     const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
     const json = await res.json();
@@ -50,7 +50,7 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
     setBusy(true);
     setFormError(undefined);
     const open = problem.parts.filter((p) => problem.results[p.key]?.verdict !== "correct");
-    const result = await postJson(`/api/practice/${problem.id}/answers`, {
+    const result = await postJson<ProblemUpdate>(`/api/practice/${problem.id}/answers`, {
       answers: Object.fromEntries(open.map((p) => [p.key, answers[p.key] ?? ""])),
       timeMs: Math.min(Date.now() - started.current, 86_400_000),
     });
@@ -61,13 +61,13 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
       return;
     }
     setFieldErrors({});
-    setProblem(result.problem);
+    setProblem((current) => ({ ...current, ...result.problem }));
     if (result.problem.status !== "open") requestAnimationFrame(() => solutionRef.current?.focus());
   };
 
   const another = async () => {
     setBusy(true);
-    const result = await postJson("/api/practice", { kind: problem.kind, level: problem.level });
+    const result = await postJson<ProblemView>("/api/practice", { kind: problem.kind, level: problem.level });
     setBusy(false);
     if (!result.ok) return setFormError(result.error.message);
     setProblem(result.problem);

@@ -1,7 +1,8 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
-import { Transaction } from "sequelize";
-import { db, queuedWrite } from "@/lib/db";
+import { QueryTypes } from "sequelize";
+import { db } from "@/lib/db";
+import { guardedInsert, sqliteDate } from "@/lib/group-commit";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
 import { gradeValue, readAnswer, type PartGrade } from "@/lib/grading/grade";
@@ -10,17 +11,11 @@ import { lessonSlugs } from "@/lib/lessons/catalog";
 import { findKind, type Level } from "@/lib/problems";
 import { newSeed } from "@/lib/problems/random";
 import { ATTEMPTS_PER_PROBLEM, MAX_ANSWER_LENGTH } from "./limits";
-import { buildView, kindOrThrow, partResult, type PartResult, type ProblemView, type StoredAttempt, type StoredProblem } from "./view";
+import { buildUpdate, buildView, partResult, workOut, type ProblemUpdate, type WorkedProblem, type PartResult, type ProblemView, type StoredAttempt, type StoredProblem } from "./view";
 
 
 /** Who is practising: a signed-in user, or an anonymous visitor known only by a cookie. */
 export type PracticeOwner = { user: SessionUser | null; visitorId: string | null };
-
-function ownerWhere(owner: PracticeOwner) {
-  if (owner.user) return { userId: owner.user.id };
-  if (owner.visitorId) return { userId: null, visitorId: owner.visitorId };
-  return null;
-}
 
 function stored(row: { id: string; kind: string; level: number; seed: number; status: string; attemptsAllowed: number; attemptsUsed: number }): StoredProblem {
   return { id: row.id, kind: row.kind, level: row.level, seed: row.seed, status: row.status as StoredProblem["status"], attemptsAllowed: row.attemptsAllowed, attemptsUsed: row.attemptsUsed };
@@ -42,20 +37,36 @@ export async function createProblem(owner: PracticeOwner, kindKey: string, level
   return buildView(stored(row), {});
 }
 
-async function findOwned(owner: PracticeOwner, id: string) {
-  const where = ownerWhere(owner);
+type ProblemWithAttempts = { problem: StoredProblem; attempts: StoredAttempt[] };
+type JoinedRow = StoredProblem & { [K in keyof StoredAttempt as `a_${K}`]: StoredAttempt[K] | null };
+
+// The problem and its earlier answers in one plain-SQL read: this is the busiest route, and
+// building the query through the models cost more than running it.
+async function findOwned(owner: PracticeOwner, id: string): Promise<ProblemWithAttempts> {
+  const mine = owner.user ? { sql: "p.user_id = ?", value: owner.user.id } : owner.visitorId ? { sql: "p.user_id IS NULL AND p.visitor_id = ?", value: owner.visitorId } : null;
   // Someone else's problem answers exactly like a missing one: ids are not confirmed to strangers.
-  const row = where && /^[0-9a-f-]{36}$/.test(id) ? await db().models.PracticeProblem.findOne({ where: { id, ...where } }) : null;
-  if (!row) throw new AppError("not_found", "That problem is not here. Start a new one from the practice page.");
-  return row;
+  const rows =
+    mine && /^[0-9a-f-]{36}$/.test(id)
+      ? await db().sequelize.query<JoinedRow>(
+          `SELECT p.id, p.kind, p.level, p.seed, p.status, p.attempts_allowed AS attemptsAllowed, p.attempts_used AS attemptsUsed,
+                  a.part AS a_part, a.raw AS a_raw, a.value AS a_value, a.verdict AS a_verdict, a.pattern AS a_pattern, a.submission AS a_submission
+           FROM practice_problems p LEFT JOIN attempts a ON a.problem_id = p.id
+           WHERE p.id = ? AND ${mine.sql}`,
+          { replacements: [id, mine.value], type: QueryTypes.SELECT },
+        )
+      : [];
+  if (rows.length === 0) throw new AppError("not_found", "That problem is not here. Start a new one from the practice page.");
+  const [first] = rows;
+  return {
+    problem: stored(first),
+    attempts: rows
+      .filter((r) => r.a_part !== null)
+      .map((r) => ({ part: r.a_part!, raw: r.a_raw!, value: r.a_value!, verdict: r.a_verdict!, pattern: r.a_pattern, submission: r.a_submission! })),
+  };
 }
 
 /** Re-grades the stored answers (they hold exact values), so messages never need storing. */
-function latestResults(problem: StoredProblem, rows: StoredAttempt[]): Record<string, PartResult | null> {
-  const kind = kindOrThrow(problem.kind);
-  const params = kind.generate(problem.seed, problem.level as Level);
-  const parts = kind.parts(params);
-  const expected = kind.solve(params);
+function latestResults({ kind, params, parts, expected }: WorkedProblem, rows: StoredAttempt[]): Record<string, PartResult | null> {
   const results: Record<string, PartResult | null> = {};
   for (const part of parts) {
     const latest = rows.filter((r) => r.part === part.key).sort((a, b) => b.submission - a.submission)[0];
@@ -68,15 +79,10 @@ function latestResults(problem: StoredProblem, rows: StoredAttempt[]): Record<st
   return results;
 }
 
-async function attemptsOf(problemId: string): Promise<StoredAttempt[]> {
-  const rows = await db().models.Attempt.findAll({ where: { problemId }, attributes: ["part", "raw", "value", "verdict", "pattern", "submission"], raw: true });
-  return rows as StoredAttempt[];
-}
-
 export async function getProblem(owner: PracticeOwner, id: string): Promise<ProblemView> {
-  const row = await findOwned(owner, id);
-  const problem = stored(row);
-  return buildView(problem, latestResults(problem, await attemptsOf(id)));
+  const { problem, attempts } = await findOwned(owner, id);
+  const work = workOut(problem);
+  return buildView(problem, latestResults(work, attempts), work);
 }
 
 export type Submission = { answers: Record<string, string>; timeMs?: number };
@@ -85,16 +91,14 @@ export type Submission = { answers: Record<string, string>; timeMs?: number };
  * Grades one try. Every part still open must be answered and readable, or nothing is stored and
  * the reply says what to fix per part. A try is stored as one row per part, together with the
  * problem's new count and status, in one transaction; a second try racing the first is refused.
+ * The reply is sent only after that transaction has committed.
  */
-export async function submitAnswers(owner: PracticeOwner, id: string, submission: Submission): Promise<ProblemView> {
-  const row = await findOwned(owner, id);
-  const problem = stored(row);
+export async function submitAnswers(owner: PracticeOwner, id: string, submission: Submission): Promise<ProblemUpdate> {
+  const { problem, attempts } = await findOwned(owner, id);
   if (problem.status !== "open") throw new AppError("conflict", "This problem is finished. Start a new one to keep practising.");
-  const kind = kindOrThrow(problem.kind);
-  const params = kind.generate(problem.seed, problem.level as Level);
-  const parts = kind.parts(params);
-  const expected = kind.solve(params);
-  const previous = latestResults(problem, await attemptsOf(id));
+  const work = workOut(problem);
+  const { kind, params, parts, expected } = work;
+  const previous = latestResults(work, attempts);
   const open = parts.filter((p) => previous[p.key]?.verdict !== "correct");
 
   const unknown = Object.keys(submission.answers).filter((key) => !parts.some((p) => p.key === key));
@@ -117,34 +121,32 @@ export async function submitAnswers(owner: PracticeOwner, id: string, submission
   const solved = parts.every((p) => previous[p.key]?.verdict === "correct" || grades[p.key]?.verdict === "correct");
   const used = problem.attemptsUsed + 1;
   const status = solved ? "solved" : used >= problem.attemptsAllowed ? "failed" : "open";
-  const { sequelize, models } = db();
-  // IMMEDIATE takes the write lock at BEGIN, so a try can never fail to upgrade a read lock;
-  // the queue keeps this process's own tries from waiting on each other's locks.
-  await queuedWrite(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-    const [count] = await models.PracticeProblem.update(
-      { attemptsUsed: used, status, finishedAt: status === "open" ? null : new Date() },
-      { where: { id, status: "open", attemptsUsed: problem.attemptsUsed }, transaction },
-    );
-    if (count !== 1) throw new AppError("conflict", "These answers crossed with another try at the same problem. Reload to see where it stands.");
-    await models.Attempt.bulkCreate(
-      open.map((part) => ({
-        problemId: id,
-        userId: owner.user?.id ?? null,
-        kind: kind.key,
-        level: problem.level,
-        seed: problem.seed,
-        submission: used,
-        part: part.key,
-        raw: submission.answers[part.key].trim().slice(0, MAX_ANSWER_LENGTH),
-        value: grades[part.key].value.toFraction(),
-        expected: expected[part.key].toFraction(),
-        verdict: grades[part.key].verdict,
-        pattern: grades[part.key].pattern,
-        timeMs: submission.timeMs ?? null,
-      })),
-      { transaction },
-    );
-  }));
+  const now = new Date();
+  const written = await guardedInsert({
+    guard: {
+      sql: "UPDATE practice_problems SET attempts_used = ?, status = ?, finished_at = ?, updated_at = ? WHERE id = ? AND status = 'open' AND attempts_used = ?",
+      params: [used, status, status === "open" ? null : sqliteDate(now), sqliteDate(now), id, problem.attemptsUsed],
+    },
+    table: "attempts",
+    columns: ["problem_id", "user_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "pattern", "time_ms", "created_at"],
+    rows: open.map((part) => [
+      id,
+      owner.user?.id ?? null,
+      kind.key,
+      problem.level,
+      problem.seed,
+      used,
+      part.key,
+      submission.answers[part.key].trim().slice(0, MAX_ANSWER_LENGTH),
+      grades[part.key].value.toFraction(),
+      expected[part.key].toFraction(),
+      grades[part.key].verdict,
+      grades[part.key].pattern,
+      submission.timeMs ?? null,
+      sqliteDate(now),
+    ]),
+  });
+  if (!written) throw new AppError("conflict", "These answers crossed with another try at the same problem. Reload to see where it stands.");
   if (solved && owner.user && lessonSlugs().includes(kind.lesson.slug)) {
     await recordProgress(owner.user, kind.lesson.slug, "practised", lessonSlugs());
   }
@@ -153,6 +155,6 @@ export async function submitAnswers(owner: PracticeOwner, id: string, submission
     const grade = grades[part.key];
     results[part.key] = partResult({ part: part.key, raw: submission.answers[part.key].trim(), value: grade.value.toFraction(), verdict: grade.verdict, pattern: grade.pattern, submission: used }, grade.readAs, grade.message);
   }
-  return buildView({ ...problem, attemptsUsed: used, status }, results);
+  return buildUpdate({ ...problem, attemptsUsed: used, status }, results, work);
 }
 

@@ -38,6 +38,9 @@ export type ProblemView = {
   final: { expected: Record<string, string>; stepsHtml: string[] } | null;
 };
 
+/** What one try changes: an answer's reply leaves out the prompt and drawing the learner already has. */
+export type ProblemUpdate = Pick<ProblemView, "id" | "status" | "attemptsUsed" | "attemptsAllowed" | "results" | "final">;
+
 export type StoredProblem = { id: string; kind: string; level: number; seed: number; status: ProblemStatus; attemptsAllowed: number; attemptsUsed: number };
 export type StoredAttempt = { part: string; raw: string; value: string; verdict: string; pattern: string | null; submission: number };
 
@@ -78,37 +81,75 @@ export function partResult(row: StoredAttempt, readAs: string, message: string):
   };
 }
 
-export function buildView(problem: StoredProblem, results: Record<string, PartResult | null>): ProblemView {
-  const kind = kindOrThrow(problem.kind);
-  const level = problem.level as Level;
-  const params = kind.generate(problem.seed, level);
-  const prompt = kind.render(params);
-  const parts = kind.parts(params);
-  const isFinal = problem.status !== "open";
-  let final: ProblemView["final"] = null;
-  if (isFinal) {
-    const expected = kind.solve(params);
-    final = {
-      expected: Object.fromEntries(parts.map((p) => [p.key, expectedText(p, expected[p.key])])),
-      stepsHtml: kind.explain(params).map(inlineMathToHtml),
-    };
+/** A stored problem rebuilt from its seed: the kind, its parameters, parts and exact answers. */
+export type WorkedProblem = {
+  kind: AnyProblemKind;
+  params: unknown;
+  parts: ProblemPart[];
+  expected: Record<string, Fraction>;
+  /** The typeset prompt, made on first use. */
+  prompt?: { html: string; figure: ProblemFigure | null };
+};
+
+// A problem is opened and answered several times, and some generators search (a cut list is
+// packed for every draw), so rebuilt problems are kept: the seed fixes them for good.
+const WORKED_KEPT = 5000;
+const worked = new Map<string, WorkedProblem>();
+
+export function workOut(problem: Pick<StoredProblem, "kind" | "level" | "seed">): WorkedProblem {
+  const key = `${problem.kind}:${problem.level}:${problem.seed}`;
+  const kept = worked.get(key);
+  if (kept) {
+    // Map order is insertion order: moving a hit to the end makes the first key the least recently used.
+    worked.delete(key);
+    worked.set(key, kept);
+    return kept;
   }
+  const kind = kindOrThrow(problem.kind);
+  const params = kind.generate(problem.seed, problem.level as Level);
+  const work: WorkedProblem = { kind, params, parts: kind.parts(params), expected: kind.solve(params) };
+  worked.set(key, work);
+  if (worked.size > WORKED_KEPT) worked.delete(worked.keys().next().value!);
+  return work;
+}
+
+function finalOf(problem: StoredProblem, { kind, params, parts, expected }: WorkedProblem): ProblemView["final"] {
+  if (problem.status === "open") return null;
+  return {
+    expected: Object.fromEntries(parts.map((p) => [p.key, expectedText(p, expected[p.key])])),
+    stepsHtml: kind.explain(params).map(inlineMathToHtml),
+  };
+}
+
+export function buildUpdate(problem: StoredProblem, results: Record<string, PartResult | null>, work: WorkedProblem): ProblemUpdate {
   return {
     id: problem.id,
+    status: problem.status,
+    attemptsAllowed: problem.attemptsAllowed,
+    attemptsUsed: problem.attemptsUsed,
+    results: Object.fromEntries(work.parts.map((p) => [p.key, results[p.key] ?? null])),
+    final: finalOf(problem, work),
+  };
+}
+
+export function buildView(problem: StoredProblem, results: Record<string, PartResult | null>, work: WorkedProblem = workOut(problem)): ProblemView {
+  const { kind, params, parts } = work;
+  const level = problem.level as Level;
+  work.prompt ??= (() => {
+    const prompt = kind.render(params);
+    return { html: mathTextToHtml(prompt.text), figure: prompt.figure ?? null };
+  })();
+  return {
+    ...buildUpdate(problem, results, work),
     kind: kind.key,
     title: kind.title,
     skill: kind.skill,
     skillTitle: SKILL_TITLES[kind.skill],
     level,
     levelLabel: kind.levels.find((l) => l.level === level)?.label ?? `Level ${level}`,
-    status: problem.status,
-    attemptsAllowed: problem.attemptsAllowed,
-    attemptsUsed: problem.attemptsUsed,
-    promptHtml: mathTextToHtml(prompt.text),
-    figure: prompt.figure ?? null,
+    promptHtml: work.prompt.html,
+    figure: work.prompt.figure,
     parts: parts.map(partView),
-    results: Object.fromEntries(parts.map((p) => [p.key, results[p.key] ?? null])),
     lessonHref: lessonHref(kind.lesson),
-    final,
   };
 }

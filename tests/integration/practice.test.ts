@@ -56,7 +56,8 @@ function expectedFor(level: Level) {
   // What a leak would look like in JSON: the rounded texts carpenters write, and the exact rationals.
   const leaks = parts.flatMap((p) => {
     const v: Fraction = expected[p.key];
-    return p.answer === "count" ? [] : [formatMeasure(v, { denominator: p.precision }).text.replace(/"/g, '\\"'), v.toFraction(), v.toFraction(true)];
+    // A whole number alone could match any id or float in the reply; its inch text (14\") cannot.
+    return p.answer === "count" ? [] : [formatMeasure(v, { denominator: p.precision }).text.replace(/"/g, '\\"'), v.toFraction(), v.toFraction(true)].filter((t) => /["/]/.test(t));
   });
   return { parts, right, wrong, leaks };
 }
@@ -139,6 +140,27 @@ describe("practice problems", () => {
     const history = await (await student.call("/api/practice/history")).json();
     expect(history.problems[0]).toMatchObject({ id, status: "solved" });
     expect(history.mastery.find((m: { skill: string }) => m.skill === findKind(KIND)!.skill).levels[0].solvedOfLastFive).toBe(1);
+  });
+
+  it("tries sent at once are each stored whole or refused whole, never lost or half-written", async () => {
+    const visitor = client();
+    // One after another: the first reply sets the visitor cookie the others must carry.
+    const ids = [await newPinnedProblem(visitor), await newPinnedProblem(visitor), await newPinnedProblem(visitor)];
+    const { wrong } = expectedFor(1);
+    // Tries at different problems arriving together share a commit; two at one problem race for it.
+    const replies = await Promise.all([...ids, ids[0]].map((id) => visitor.call(`/api/practice/${id}/answers`, { answers: wrong })));
+    const statuses = replies.map((r) => r.status);
+    expect(statuses.slice(1, 3)).toEqual([200, 200]);
+    // The racing pair: the second either lost the race (409) or arrived after the first was stored (a second try).
+    const raced = [statuses[0], statuses[3]].filter((s) => s === 200).length;
+    expect([statuses[0], statuses[3]].every((s) => s === 200 || s === 409)).toBe(true);
+    expect(raced).toBeGreaterThanOrEqual(1);
+    for (const id of ids) {
+      const { rows, problem } = await storedAttempts(id);
+      const acknowledged = id === ids[0] ? raced : 1;
+      expect(problem?.attemptsUsed).toBe(acknowledged);
+      expect(rows).toHaveLength(acknowledged * Object.keys(wrong).length);
+    }
   });
 
   it("history needs an account; a student cannot skip ahead to a level they have not opened", async () => {

@@ -1,0 +1,26 @@
+import { randomUUID } from "node:crypto";
+import { openDatabase } from "@/lib/db";
+import { prepareDatabase } from "@/lib/setup";
+import { findKind } from "@/lib/problems";
+void (async () => {
+  const file = "/tmp/pdb/p.sqlite";
+  process.env.DATABASE_PATH = file; process.env.NEXTAUTH_SECRET = "x".repeat(40);
+  await prepareDatabase(file, { seed: false, bcryptCost: 10 });
+  const { submitAnswers, getProblem } = await import("@/lib/practice/problems");
+  const visitorId = randomUUID();
+  const database = openDatabase(file);
+  const kind = findKind("even-gap")!;
+  const problems = Array.from({ length: 3000 }, (_, i) => ({ id: randomUUID(), userId: null, visitorId, kind: kind.key, level: 2, seed: i, attemptsAllowed: 3 }));
+  await database.models.PracticeProblem.bulkCreate(problems);
+  const owner = { user: null, visitorId };
+  const answers = (i: number) => ({ answers: Object.fromEntries(kind.parts(kind.generate(i, 2)).map((p) => [p.key, p.answer === "count" ? "1" : "1 1/16"])) });
+  let t0 = performance.now();
+  for (let i = 0; i < 200; i++) await getProblem(owner, problems[i].id);
+  console.log("get seq", ((performance.now() - t0) / 200).toFixed(2));
+  t0 = performance.now();
+  for (let i = 0; i < 200; i++) await submitAnswers(owner, problems[i].id, answers(i));
+  console.log("submit seq", ((performance.now() - t0) / 200).toFixed(2));
+  t0 = performance.now();
+  for (let b = 0; b < 40; b++) await Promise.all(Array.from({ length: 32 }, (_, j) => { const i = 200 + b * 32 + j; return submitAnswers(owner, problems[i].id, answers(i)); }));
+  console.log("submit x32 per op", ((performance.now() - t0) / 1280).toFixed(2));
+})();

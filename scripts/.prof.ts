@@ -1,0 +1,26 @@
+import { spawn } from "node:child_process";
+import { randomUUID } from "node:crypto";
+import autocannon from "autocannon";
+import { openDatabase } from "@/lib/db";
+import { prepareDatabase } from "@/lib/setup";
+import { PROBLEM_KINDS, LEVELS } from "@/lib/problems";
+void (async () => {
+  const file = "/tmp/pdb/p.sqlite";
+  await prepareDatabase(file, { seed: false, bcryptCost: 10 });
+  const visitorId = randomUUID();
+  const database = openDatabase(file);
+  const problems = Array.from({ length: 3000 }, (_, i) => ({ id: randomUUID(), userId: null, visitorId, kind: PROBLEM_KINDS[i % 10].key, level: LEVELS[Math.floor(i / 10) % 3], seed: i, attemptsAllowed: 3 }));
+  await database.models.PracticeProblem.bulkCreate(problems);
+  await database.sequelize.close();
+  const child = spawn(process.execPath, ["--cpu-prof", "--cpu-prof-dir=/tmp/prof", "node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", "39113"], { env: { ...process.env, NODE_ENV: "production", DATABASE_PATH: file, NEXTAUTH_SECRET: "x".repeat(40), NEXTAUTH_URL: "http://127.0.0.1:39113", ANSWERS_PER_MINUTE: "100000000" }, stdio: "inherit" });
+  await new Promise((r) => setTimeout(r, 3000));
+  const headers = { cookie: `sixteenths-visitor=${visitorId}` };
+  for (let i = 0; i < problems.length; i += 8) await Promise.all(problems.slice(i, i + 8).map(async (p) => (await fetch(`http://127.0.0.1:39113/api/practice/${p.id}`, { headers })).text()));
+  console.log("opened");
+  const bodies = problems.map((p) => { const k = PROBLEM_KINDS.find((x) => x.key === p.kind)!; return JSON.stringify({ answers: Object.fromEntries(k.parts(k.generate(p.seed, p.level)).map((part) => [part.key, part.answer === "count" ? "1" : "1 1/16"])) }); });
+  let n = 0;
+  const r = await new Promise<autocannon.Result>((res, rej) => autocannon({ url: "http://127.0.0.1:39113", connections: 32, duration: 6, requests: [{ method: "POST", headers: { "content-type": "application/json", ...headers }, setupRequest: (req) => { const i = n++ % problems.length; return { ...req, path: `/api/practice/${problems[i].id}/answers`, body: bodies[i] }; } }] }, (e, x) => (e ? rej(e) : res(x))));
+  console.log("answers", r.requests.average, r.latency.p99);
+  child.kill("SIGINT");
+  await new Promise((r2) => child.once("exit", r2));
+})();
