@@ -21,7 +21,7 @@ export default defineConfig({
     launchOptions: chromium,
   },
   projects: [
-    { name: "desktop", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 800 }, launchOptions: chromium } },
-    { name: "phone", use: { viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, launchOptions: chromium }, testMatch: /(shell|lessons)\.spec\.ts/ },
+    { name: "desktop", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 800 }, launchOptions: chromium }, testIgnore: /-phone\.spec\.ts/ },
+    { name: "phone", use: { viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, launchOptions: chromium }, testMatch: /(shell|lessons-phone)\.spec\.ts/ },
   ],
 });

@@ -25,9 +25,8 @@ test("an anonymous reader is invited to sign up to keep progress", async ({ page
   await expect(page.getByText("to mark lessons complete and keep your progress")).toBeVisible();
 });
 
-test("a student marks a lesson complete and sees it in the outline after a reload", async ({ page }, testInfo) => {
-  // Each project gets its own student: the lesson stays completed in the shared test database.
-  const student = testInfo.project.name === "phone" ? DEMO_STUDENTS[8] : DEMO_STUDENTS[9];
+test("a student marks a lesson complete and sees it in the outline after a reload", async ({ page }) => {
+  const student = DEMO_STUDENTS[9];
   await signIn(page, student.email);
   await expectSignedInAs(page, student.name);
   await page.goto("/lessons/even-spacing");
@@ -64,12 +63,11 @@ test("lesson math is set by KaTeX's stylesheet: the MathML copy is for screen re
   await expect(formula.locator(".katex-html")).toHaveCSS("display", "block");
 });
 
-test("a lesson's calculator lays out in the text column without cramming its results", async ({ page }, testInfo) => {
+test("a lesson's calculator lays out in the text column without cramming its results", async ({ page }) => {
   await page.goto("/lessons/board-and-batten-wall");
   const calculator = page.getByRole("region", { name: "Wall grid calculator" });
   // The lesson's own list styling stops at the calculator: its warnings carry no bullets.
   await expect(calculator.getByRole("list", { name: "Warnings" })).toHaveCSS("list-style-type", "none");
-  test.skip(testInfo.project.name === "phone", "on a phone wide tables scroll sideways in their own box");
   // Side by side in a prose-wide column, the results were too narrow for their tables, which scrolled.
   const crammed = await calculator.locator("table").evaluateAll((tables) =>
     tables.filter((t) => t.parentElement!.scrollWidth > t.parentElement!.clientWidth + 1).map((t) => t.querySelector("caption")?.textContent ?? "a table"),
@@ -77,8 +75,7 @@ test("a lesson's calculator lays out in the text column without cramming its res
   expect(crammed).toEqual([]);
 });
 
-test("on a desktop the table of contents is a side column that stays in view", async ({ page }, testInfo) => {
-  test.skip(testInfo.project.name === "phone", "the side column starts at the lg breakpoint");
+test("on a desktop the table of contents is a side column that stays in view", async ({ page }) => {
   await page.goto("/lessons/board-and-batten-wall");
   const toc = page.getByRole("navigation", { name: "In this lesson" });
   await expect(toc).toBeVisible();
@@ -87,35 +84,4 @@ test("on a desktop the table of contents is a side column that stays in view", a
   await expect(page).toHaveURL(/#order-of-installation$/);
   await expect(page.getByRole("heading", { name: "Order of installation", level: 2 })).toBeInViewport();
   await expect(toc).toBeInViewport();
-});
-
-test("on a phone the table of contents folds under the lesson header and its links jump", async ({ page }, testInfo) => {
-  test.skip(testInfo.project.name !== "phone", "the folded list is for screens below the lg breakpoint");
-  await page.goto("/lessons/board-and-batten-wall");
-  await expect(page.getByRole("navigation", { name: "In this lesson" })).toBeHidden();
-  const summary = page.locator("summary", { hasText: "On this page" });
-  const title = page.getByRole("heading", { level: 1 });
-  // The title and summary come first; the folded list sits under them, above the lesson text.
-  const [titleBox, summaryBox, objectivesBox] = await Promise.all([title.boundingBox(), summary.boundingBox(), page.getByRole("heading", { name: "Objectives" }).boundingBox()]);
-  expect(summaryBox!.y).toBeGreaterThan(titleBox!.y + titleBox!.height);
-  expect(summaryBox!.y).toBeLessThan(objectivesBox!.y);
-
-  const toc = page.getByRole("navigation", { name: "On this page" });
-  await expect(toc).toBeHidden();
-  // Keyboard: the summary takes focus and Enter opens it; Tab reaches the first link.
-  await summary.focus();
-  await page.keyboard.press("Enter");
-  await expect(toc).toBeVisible();
-  await page.keyboard.press("Tab");
-  await expect(toc.getByRole("link", { name: "Objectives" })).toBeFocused();
-
-  await toc.getByRole("link", { name: "Order of installation" }).tap();
-  await expect(page).toHaveURL(/#order-of-installation$/);
-  await expect(page.getByRole("heading", { name: "Order of installation", level: 2 })).toBeInViewport();
-  await expect(summary).not.toBeInViewport();
-
-  await page.evaluate(() => window.scrollTo(0, 0));
-  await toc.getByRole("link", { name: "Sources" }).tap();
-  await expect(page).toHaveURL(/#sources$/);
-  await expect(page.getByRole("heading", { name: "Sources", level: 2 })).toBeInViewport();
 });
