@@ -2,35 +2,9 @@ import { describe, expect, it } from "vitest";
 import { Fraction } from "@/lib/layout";
 import { markPosition, markPositionSlips, type MarkPositionParams } from "@/lib/problems/mark-position";
 import { inchText, precisionFor, roundedAnswer, roundingSlip } from "@/lib/problems/kit";
-import { faceWidth, NUMBER_WORDS } from "@/lib/problems/spacing-figures";
-import { LEVELS, type ProblemKind, type ProblemPart } from "@/lib/problems/types";
-
-const SEEDS = 500;
-const TIMEOUT = 60_000;
-const f = (value: number | string) => new Fraction(value);
-const MEASURE = /(\d+' )?(\d+ \d+\/\d+|\d+\/\d+|\d+)"|\d+x\d+/g;
-
-/** Whole measurements written in a text, and the words left once they are taken out. */
-function readText(text: string) {
-  return { measures: Array.from(text.matchAll(MEASURE), (m) => m[0]), rest: text.replace(MEASURE, " ") };
-}
-
-/** The prompt (and figure) shows no expected value: no length token equal to one, no count in figures or words. */
-function hiddenAnswers<P>(kind: ProblemKind<P>, params: P) {
-  const prompt = kind.render(params);
-  const text = [prompt.text, prompt.figure?.description ?? "", ...(prompt.figure?.dimensions.map((d) => d.label) ?? []), ...(prompt.figure?.rects.map((r) => r.label ?? "") ?? [])].join("\n");
-  const { measures, rest } = readText(text);
-  const expected = kind.solve(params);
-  return kind.parts(params).every((part: ProblemPart) => {
-    const value = expected[part.key];
-    if (part.answer === "count") {
-      const n = Number(value.valueOf());
-      return !new RegExp(`\\b${n}\\b`).test(rest) && !(NUMBER_WORDS[n] && new RegExp(`\\b${NUMBER_WORDS[n]}\\b`, "i").test(rest));
-    }
-    const rounded = roundedAnswer(value, part.precision);
-    return !measures.includes(inchText(rounded)) && !measures.includes(inchText(rounded, "feet-inches"));
-  });
-}
+import { faceWidth } from "@/lib/problems/spacing-figures";
+import { LEVELS } from "@/lib/problems/types";
+import { expectSlipsNamed, f, hiddenAnswers, SEEDS, TIMEOUT } from "./support";
 
 describe("mark-position outside checks", () => {
   // common practice, no source: the demo hallway wall of the mark-from-one-end lesson, 141 1/2"
@@ -84,11 +58,7 @@ describe("mark-position over many seeds", () => {
         const drift = slips.find((x) => x.part === "edge" && x.pattern === "added-rounded-gaps")!;
         // At least one graduation beyond the tolerance.
         expect(drift.value.sub(s.edge).abs().compare(new Fraction(3, 2 * precision)) >= 0).toBe(true);
-        for (const slip of slips) {
-          const answer = roundedAnswer(slip.value, precision);
-          expect(answer.sub(s[slip.part]).abs().compare(new Fraction(1, 2 * precision)) > 0).toBe(true);
-          expect(markPosition.diagnose(p, slip.part, answer)).toBe(slip.pattern);
-        }
+        expectSlipsNamed(markPosition, p, slips);
         const up = s.edge.mul(precision).ceil().div(precision);
         const down = s.edge.mul(precision).floor().div(precision);
         if (!up.equals(down)) {
