@@ -69,7 +69,7 @@ export function gradeValue(part: ProblemPart, expected: Fraction, value: Fractio
     ? `${verdict === "imprecise" ? `Close, but not ${precisionNote}. ` : ""}${ERROR_PATTERNS[pattern].feedback}`
     : verdict === "imprecise"
       ? `Close, but not ${precisionNote}. Work the exact value, then round once.`
-      : "Not right. Check each step against the drawing and try again.";
+      : "Work it again one step at a time, from the numbers in the question.";
   return { verdict, value, readAs, pattern, message };
 }
 
