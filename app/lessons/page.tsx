@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { LessonMasteryBadge } from "@/components/lessons/mastery-client";
 import { LessonProgressBadge, ProgressPrompt } from "@/components/lessons/progress-client";
 import { courseOutline } from "@/lib/lessons/load";
 
@@ -32,6 +33,7 @@ export default async function LessonsPage() {
               <p className="mt-1 flex flex-wrap items-center gap-3 text-sm text-ink-faint">
                 <span>{lesson.minutes} min</span>
                 <LessonProgressBadge slug={lesson.slug} />
+                <LessonMasteryBadge skill={lesson.skill} />
               </p>
             </div>
           </li>

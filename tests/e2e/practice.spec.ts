@@ -75,6 +75,10 @@ test("a self-learner makes a slip, sees it named, puts it right, sees the worked
   await page.goto("/practice");
   await expect(page.locator(`[data-skill="${KIND.skill}"] [data-mastery]`)).toContainText("level 1: 1 of the last 1 solved");
   await expect(page.getByRole("table", { name: /practice problems/ }).getByRole("link", { name: KIND.title })).toBeVisible();
+
+  // The course outline shows the practice beside the lesson that teaches the skill.
+  await page.goto("/lessons");
+  await expect(page.locator(`[data-mastery="${KIND.skill}"]`)).toHaveText("Practice: 0 of 3 levels mastered");
 });
 
 test("an anonymous reader starts a problem inside a lesson and is asked to sign up to keep progress", async ({ page }) => {

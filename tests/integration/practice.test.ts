@@ -140,6 +140,8 @@ describe("practice problems", () => {
     const history = await (await student.call("/api/practice/history")).json();
     expect(history.problems[0]).toMatchObject({ id, status: "solved" });
     expect(history.mastery.find((m: { skill: string }) => m.skill === findKind(KIND)!.skill).levels[0].solvedOfLastFive).toBe(1);
+    const { mastery } = await (await student.call("/api/practice/mastery")).json();
+    expect(mastery).toEqual(history.mastery);
   });
 
   it("tries sent at once are each stored whole or refused whole, never lost or half-written", async () => {
@@ -165,6 +167,7 @@ describe("practice problems", () => {
 
   it("history needs an account; a student cannot skip ahead to a level they have not opened", async () => {
     expect((await client().call("/api/practice/history")).status).toBe(401);
+    expect((await client().call("/api/practice/mastery")).status).toBe(401);
     const student = client((await signInCookie(baseURL, DEMO_STUDENTS[6].email, DEMO_PASSWORD))!);
     expect((await student.call("/api/practice", { kind: KIND, level: 3 })).status).toBe(403);
     expect((await student.call("/api/practice/history?page=0")).status).toBe(400);
