@@ -61,8 +61,7 @@ export async function masteryFor(user: SessionUser | null): Promise<SkillMastery
  * "Next problem": a kind of the weakest skill (or of the skill asked for, as a lesson does) at
  * the level the learner has reached.
  */
-export async function nextProblemChoice(user: SessionUser | null, onlySkill?: string): Promise<{ kind: string; level: Level }> {
-  const mastery = await masteryFor(user);
+export function nextProblemChoice(user: SessionUser | null, mastery: SkillMastery[], onlySkill?: string): { kind: string; level: Level } {
   const available = new Set<Skill>(PROBLEM_KINDS.map((k) => k.skill));
   const random = createRandom(newSeed());
   const asked = onlySkill ? mastery.find((m) => m.skill === onlySkill) : undefined;

@@ -12,8 +12,9 @@ export const POST = handle(async (req) => {
   const body = newProblemSchema.parse(await readJson(req));
   const { owner, setCookie } = withVisitor(await ownerFromRequest(req));
   await consume("newProblem", ownerKey(owner));
-  const choice = "kind" in body ? body : await nextProblemChoice(owner.user, "skill" in body ? body.skill : undefined);
-  if (!levelAllowed(owner.user, await masteryFor(owner.user), choice.kind, choice.level)) {
+  const mastery = await masteryFor(owner.user);
+  const choice = "kind" in body ? body : nextProblemChoice(owner.user, mastery, "skill" in body ? body.skill : undefined);
+  if (!levelAllowed(owner.user, mastery, choice.kind, choice.level)) {
     throw new AppError("forbidden", "Master the level below first: four of your last five problems there solved.");
   }
   return setCookie(NextResponse.json({ problem: await createProblem(owner, choice.kind, choice.level) }, { status: 201 }));
