@@ -15,7 +15,6 @@ import { MeasureField } from "./measure-field";
 import { CountReadout, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText } from "./readouts";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { useUrlForm, type SearchParamsRecord } from "./use-url-form";
-import { OptionalMeasureField } from "./wall-grid-fields";
 
 export type { CutListValues } from "./cut-list-codec";
 
@@ -93,7 +92,7 @@ export function CutListCalculator({ initial, start, compact = false, signedIn = 
       <fieldset className="space-y-1">
         <legend className="mb-1 text-base font-semibold">Saw</legend>
         <MeasureField label="Kerf (saw blade width)" registration={register("kerf")} value={values.kerf} {...field} error={errors.kerf} hint="1/8 for a full-kerf blade, 3/32 thin-kerf" />
-        <OptionalMeasureField label="End trim per board" registration={register("trim")} value={values.trim} {...field} error={errors.trim} blankMeans="no trim; the factory ends are used as they come" />
+        <MeasureField label="End trim per board" registration={register("trim")} value={values.trim} {...field} error={errors.trim} whenBlank="blank: no trim; the factory ends are used as they come" />
       </fieldset>
     </>
   );

@@ -14,7 +14,7 @@ import { MeasureField } from "./measure-field";
 import { CountReadout, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText } from "./readouts";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
-import { LengthListField, MemberWidthField, OptionalMeasureField, splitList } from "./wall-grid-fields";
+import { LengthListField, MemberWidthField, splitList } from "./wall-grid-fields";
 import { WallGridDrawing } from "./wall-grid-drawing";
 import { GridCutLists, PieceListTable, RailsTable, RowHeightsTable, StudCheckTable, WallGridWorking } from "./wall-grid-tables";
 
@@ -130,7 +130,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
         <legend className="mb-1 text-base font-semibold">Rails and base trim</legend>
         <MemberWidthField label="Top rail width" registration={register("topRailWidth")} value={values.topRailWidth} {...field} error={errors.topRailWidth} hint="0 for no top rail" onPick={pick("topRailWidth")} />
         <MemberWidthField label="Bottom rail width" registration={register("bottomRailWidth")} value={values.bottomRailWidth} {...field} error={errors.bottomRailWidth} hint="sits on the base trim" onPick={pick("bottomRailWidth")} />
-        <OptionalMeasureField label="Existing base trim height" registration={register("baseTrimHeight")} value={values.baseTrimHeight} {...field} error={errors.baseTrimHeight} blankMeans="no base trim" />
+        <MeasureField label="Existing base trim height" registration={register("baseTrimHeight")} value={values.baseTrimHeight} {...field} error={errors.baseTrimHeight} whenBlank="blank: no base trim" />
       </fieldset>
       <fieldset className="space-y-2">
         <legend className="mb-1 text-base font-semibold">Verticals (battens)</legend>
@@ -169,7 +169,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
           </p>
         </div>
         {values.rows.trim() !== "" && values.rows.trim() !== "0" ? (
-          <MemberWidthField label="Row rail width" registration={register("rowWidth")} value={values.rowWidth} {...field} error={errors.rowWidth} blankMeans="same as the verticals" onPick={pick("rowWidth")} />
+          <MemberWidthField label="Row rail width" registration={register("rowWidth")} value={values.rowWidth} {...field} error={errors.rowWidth} whenBlank="blank: same as the verticals" onPick={pick("rowWidth")} />
         ) : null}
       </fieldset>
       <fieldset className="space-y-1">
