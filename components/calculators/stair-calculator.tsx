@@ -9,7 +9,7 @@ import { fieldErrorsFrom } from "@/lib/errors";
 import { CalculatorFrame } from "./calculator-frame";
 import { convertLengths } from "./convert-units";
 import { MeasureField } from "./measure-field";
-import { CodeCaution, CountReadout, Readout, ReadoutGrid, summaryLine, WarningList, lengthText, type Display } from "./readouts";
+import { CodeCaution, CountReadout, Readout, ReadoutGrid, WarningList, lengthText, type Display } from "./readouts";
 import { StairDrawing } from "./stair-drawing";
 import { RulesOfThumbTable, StairRoundingNote, StepMarksTable } from "./stair-tables";
 import { UnitPrecisionFields } from "./unit-precision-fields";
@@ -163,14 +163,12 @@ export function StairCalculator({ initial, start, compact = false, signedIn = fa
       compact={compact}
       signedIn={signedIn}
       sheetSummary={
-        result
-          ? summaryLine([
-              ["total rise", lengthText(result.totalRise, display, "feet-inches")],
-              ["risers", `${result.riserCount} × ${lengthText(result.riserHeight.exact, display)}`],
-              ["treads", `${result.treadCount} × ${lengthText(result.treadDepth.exact, display)}`],
-              ["total run", lengthText(result.totalRun.exact, display, "feet-inches")],
-            ])
-          : ""
+        result && [
+          ["total rise", lengthText(result.totalRise, display, "feet-inches")],
+          ["risers", `${result.riserCount} × ${lengthText(result.riserHeight.exact, display)}`],
+          ["treads", `${result.treadCount} × ${lengthText(result.treadDepth.exact, display)}`],
+          ["total run", lengthText(result.totalRun.exact, display, "feet-inches")],
+        ]
       }
     />
   );

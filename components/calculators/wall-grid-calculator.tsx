@@ -11,7 +11,7 @@ import { convertLengths } from "./convert-units";
 import { cutListHref } from "./cut-list-codec";
 import { MarksTable } from "./marks-table";
 import { MeasureField } from "./measure-field";
-import { CountReadout, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText } from "./readouts";
+import { CountReadout, FixFieldsNote, Readout, ReadoutGrid, RoundingNote, WarningList, lengthText } from "./readouts";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
 import { LengthListField, MemberWidthField, splitList } from "./wall-grid-fields";
@@ -233,7 +233,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
       <RoundingNote denominator={display.denominator} unit={display.unit} />
     </div>
   ) : (
-    <p className="card p-4 text-ink-soft">Fix the highlighted {Object.keys(errors).length === 1 ? "field" : "fields"} to see the layout.</p>
+    <FixFieldsNote errorCount={Object.keys(errors).length} what="layout" />
   );
 
   const t = (v: Fraction) => lengthText(v, display);
@@ -247,15 +247,13 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
       compact={compact}
       signedIn={signedIn}
       sheetSummary={
-        result
-          ? summaryLine([
-              ["wall", `${t(result.wallWidth)} × ${t(result.wallHeight)}`],
-              ["verticals", `${result.verticals.length} × ${t(result.verticalLayout.memberWidth)}`],
-              ["rails", `top ${t(result.rails.top.width)}, bottom ${t(result.rails.bottom.width)}, base ${t(result.rails.bottom.bottom)}`],
-              ["rows", String(result.rows.length)],
-              ["studs", request?.studs ? `${t(request.studs.studSpacing ?? DEFAULT_STUD_SPACING)} o.c. from ${t(request.studs.firstStudCenter)}` : "not checked"],
-            ])
-          : ""
+        result && [
+          ["wall", `${t(result.wallWidth)} × ${t(result.wallHeight)}`],
+          ["verticals", `${result.verticals.length} × ${t(result.verticalLayout.memberWidth)}`],
+          ["rails", `top ${t(result.rails.top.width)}, bottom ${t(result.rails.bottom.width)}, base ${t(result.rails.bottom.bottom)}`],
+          ["rows", String(result.rows.length)],
+          ["studs", request?.studs ? `${t(request.studs.studSpacing ?? DEFAULT_STUD_SPACING)} o.c. from ${t(request.studs.firstStudCenter)}` : "not checked"],
+        ]
       }
     />
   );
