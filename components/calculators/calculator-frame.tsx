@@ -17,9 +17,13 @@ type Props = {
   query: string;
   compact?: boolean;
   signedIn?: boolean;
-  /** A one-line summary of the inputs printed at the top of the shop sheet. */
-  sheetSummary: string;
+  /** The inputs as label/value pairs, printed as one line at the top of the shop sheet; null while the inputs cannot be read. */
+  sheetSummary: [string, string][] | null;
 };
+
+function summaryLine(parts: [string, string][] | null): string {
+  return parts ? parts.map(([k, v]) => `${k} ${v}`).join(" · ") : "";
+}
 
 /**
  * The common frame of every calculator: inputs beside results on a desktop, stacked on a
@@ -32,7 +36,7 @@ export function CalculatorFrame({ kind, title, inputs, results, query, compact =
     <section aria-label={`${title} calculator`} className={compact ? "card @container my-6 space-y-4 p-4" : "space-y-4"} data-calculator={kind}>
       <div className="hidden print:block">
         <p className="text-xs uppercase tracking-wide">Sixteenths shop sheet · {title}</p>
-        <p className="measure text-sm">{sheetSummary}</p>
+        <p className="measure text-sm">{summaryLine(sheetSummary)}</p>
       </div>
       {compact ? null : (
         <div data-chrome className="flex flex-wrap gap-2">

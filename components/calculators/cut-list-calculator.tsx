@@ -12,10 +12,9 @@ import { cutListCodec, type CutListValues } from "./cut-list-codec";
 import { PieceRows, StockRows } from "./cut-list-rows";
 import { BoardCutTables, BuyTable, CutListVerdict, priceText } from "./cut-list-tables";
 import { MeasureField } from "./measure-field";
-import { CountReadout, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText } from "./readouts";
+import { CountReadout, FixFieldsNote, Readout, ReadoutGrid, RoundingNote, WarningList, lengthText } from "./readouts";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { useUrlForm, type SearchParamsRecord } from "./use-url-form";
-import { OptionalMeasureField } from "./wall-grid-fields";
 
 export type { CutListValues } from "./cut-list-codec";
 
@@ -93,7 +92,7 @@ export function CutListCalculator({ initial, start, compact = false, signedIn = 
       <fieldset className="space-y-1">
         <legend className="mb-1 text-base font-semibold">Saw</legend>
         <MeasureField label="Kerf (saw blade width)" registration={register("kerf")} value={values.kerf} {...field} error={errors.kerf} hint="1/8 for a full-kerf blade, 3/32 thin-kerf" />
-        <OptionalMeasureField label="End trim per board" registration={register("trim")} value={values.trim} {...field} error={errors.trim} blankMeans="no trim; the factory ends are used as they come" />
+        <MeasureField label="End trim per board" registration={register("trim")} value={values.trim} {...field} error={errors.trim} whenBlank="blank: no trim; the factory ends are used as they come" />
       </fieldset>
     </>
   );
@@ -126,7 +125,7 @@ export function CutListCalculator({ initial, start, compact = false, signedIn = 
         <RoundingNote denominator={display.denominator} unit={display.unit} />
       </div>
     ) : (
-      <p className="card p-4 text-ink-soft">Fix the highlighted {Object.keys(errors).length === 1 ? "field" : "fields"} to see the cut list.</p>
+      <FixFieldsNote errorCount={Object.keys(errors).length} what="cut list" />
     );
 
   return (
@@ -139,14 +138,12 @@ export function CutListCalculator({ initial, start, compact = false, signedIn = 
       compact={compact}
       signedIn={signedIn}
       sheetSummary={
-        request
-          ? summaryLine([
-              ["pieces", String(pieceCount)],
-              ["stock", request.stock.map((s) => lengthText(s.length, display, "feet-inches") + (s.price !== undefined ? ` at ${priceText(s.price)}` : "")).join(", ")],
-              ["kerf", lengthText(request.kerf, display)],
-              ["trim", !request.trim || request.trim.n === 0n ? "none" : lengthText(request.trim, display)],
-            ])
-          : ""
+        request && [
+          ["pieces", String(pieceCount)],
+          ["stock", request.stock.map((s) => lengthText(s.length, display, "feet-inches") + (s.price !== undefined ? ` at ${priceText(s.price)}` : "")).join(", ")],
+          ["kerf", lengthText(request.kerf, display)],
+          ["trim", !request.trim || request.trim.n === 0n ? "none" : lengthText(request.trim, display)],
+        ]
       }
     />
   );

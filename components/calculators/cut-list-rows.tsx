@@ -12,36 +12,66 @@ type RowsProps = { form: UseFormReturn<CutListValues>; values: CutListValues; er
 
 type Removed<R> = { index: number; row: R; name: string } | null;
 
-/** The undo line after a removal: the row comes back where it was, and focus lands on the button. */
-function UndoRemoval({ removed, onUndo, undoRef }: { removed: Removed<unknown>; onUndo: () => void; undoRef: React.RefObject<HTMLButtonElement | null> }) {
+/**
+ * Removing a row with an undo: the row comes back where it was, and focus moves to the undo
+ * button (or the add button) because the removed row's own buttons are gone.
+ */
+function useUndoableRemoval<R>(count: number, remove: (index: number) => void, insert: (index: number, row: R) => void) {
+  const [removed, setRemoved] = useState<Removed<R>>(null);
+  const undoRef = useRef<HTMLButtonElement>(null);
+  const addRef = useRef<HTMLButtonElement>(null);
+  return {
+    removed,
+    undoRef,
+    addRef,
+    removeRow: (index: number, row: R, name: string) => {
+      remove(index);
+      setRemoved({ index, row, name });
+      requestAnimationFrame(() => (undoRef.current ?? addRef.current)?.focus());
+    },
+    undo: () => {
+      if (!removed) return;
+      insert(Math.min(removed.index, count), removed.row);
+      setRemoved(null);
+    },
+    forget: () => setRemoved(null),
+  };
+}
+
+type Removal = ReturnType<typeof useUndoableRemoval<unknown>>;
+
+/** Under a list of rows: the list's own error, the undo line after a removal, and the add button. */
+function RowsFooter({ error, removal, disabled, onAdd, children }: { error?: string; removal: Pick<Removal, "removed" | "undoRef" | "addRef" | "undo">; disabled: boolean; onAdd: () => void; children: React.ReactNode }) {
+  const { removed, undoRef, addRef, undo } = removal;
   return (
-    <p aria-live="polite" className="min-h-5 text-sm">
-      {removed ? (
-        <>
-          Removed {removed.name}.{" "}
-          <button ref={undoRef} type="button" className="font-semibold text-chalk-dark underline underline-offset-2" onClick={onUndo}>
-            Undo
-          </button>
-        </>
-      ) : null}
-    </p>
+    <>
+      {error ? <p className="text-sm font-semibold text-danger">{error}</p> : null}
+      <p aria-live="polite" className="min-h-5 text-sm">
+        {removed ? (
+          <>
+            Removed {removed.name}.{" "}
+            <button ref={undoRef} type="button" className="font-semibold text-chalk-dark underline underline-offset-2" onClick={undo}>
+              Undo
+            </button>
+          </>
+        ) : null}
+      </p>
+      <button ref={addRef} type="button" className="btn-quiet" disabled={disabled} onClick={onAdd}>
+        {children}
+      </button>
+    </>
   );
 }
 
 export function PieceRows({ form, values, errors, unit, denominator }: RowsProps) {
   const { control, register } = form;
   const { fields, append, remove, insert } = useFieldArray({ control, name: "pieces" });
-  const [removed, setRemoved] = useState<Removed<CutListPieceRow>>(null);
-  const undoRef = useRef<HTMLButtonElement>(null);
-  const addRef = useRef<HTMLButtonElement>(null);
+  const removal = useUndoableRemoval<CutListPieceRow>(fields.length, remove, insert);
   const id = useId();
 
   const removeRow = (index: number) => {
     const row = values.pieces[index];
-    remove(index);
-    setRemoved({ index, row, name: row.label.trim() ? `“${row.label.trim()}”` : `piece ${index + 1}` });
-    // After the row goes, its buttons are gone too; the undo button is the next useful place.
-    requestAnimationFrame(() => (undoRef.current ?? addRef.current)?.focus());
+    removal.removeRow(index, row, row.label.trim() ? `“${row.label.trim()}”` : `piece ${index + 1}`);
   };
 
   return (
@@ -88,28 +118,17 @@ export function PieceRows({ form, values, errors, unit, denominator }: RowsProps
           );
         })}
       </ol>
-      {errors.pieces ? <p className="text-sm font-semibold text-danger">{errors.pieces}</p> : null}
-      <UndoRemoval
-        removed={removed}
-        undoRef={undoRef}
-        onUndo={() => {
-          if (!removed) return;
-          insert(Math.min(removed.index, fields.length), removed.row);
-          setRemoved(null);
-        }}
-      />
-      <button
-        ref={addRef}
-        type="button"
-        className="btn-quiet"
+      <RowsFooter
+        error={errors.pieces}
+        removal={removal}
         disabled={fields.length >= MAX_PIECE_ROWS}
-        onClick={() => {
-          setRemoved(null);
+        onAdd={() => {
+          removal.forget();
           append({ label: "", length: "", quantity: "1" }, { shouldFocus: true, focusName: `pieces.${fields.length}.label` });
         }}
       >
         Add a piece
-      </button>
+      </RowsFooter>
     </fieldset>
   );
 }
@@ -117,16 +136,12 @@ export function PieceRows({ form, values, errors, unit, denominator }: RowsProps
 export function StockRows({ form, values, errors, unit, denominator }: RowsProps) {
   const { control, register } = form;
   const { fields, append, remove, insert } = useFieldArray({ control, name: "stock" });
-  const [removed, setRemoved] = useState<Removed<CutListStockRow>>(null);
-  const undoRef = useRef<HTMLButtonElement>(null);
-  const addRef = useRef<HTMLButtonElement>(null);
+  const removal = useUndoableRemoval<CutListStockRow>(fields.length, remove, insert);
   const id = useId();
 
   const removeRow = (index: number) => {
     const row = values.stock[index];
-    remove(index);
-    setRemoved({ index, row, name: row.length.trim() ? `the ${row.length.trim()} stock` : `stock length ${index + 1}` });
-    requestAnimationFrame(() => (undoRef.current ?? addRef.current)?.focus());
+    removal.removeRow(index, row, row.length.trim() ? `the ${row.length.trim()} stock` : `stock length ${index + 1}`);
   };
 
   return (
@@ -165,28 +180,17 @@ export function StockRows({ form, values, errors, unit, denominator }: RowsProps
           );
         })}
       </ol>
-      {errors.stock ? <p className="text-sm font-semibold text-danger">{errors.stock}</p> : null}
-      <UndoRemoval
-        removed={removed}
-        undoRef={undoRef}
-        onUndo={() => {
-          if (!removed) return;
-          insert(Math.min(removed.index, fields.length), removed.row);
-          setRemoved(null);
-        }}
-      />
-      <button
-        ref={addRef}
-        type="button"
-        className="btn-quiet"
+      <RowsFooter
+        error={errors.stock}
+        removal={removal}
         disabled={fields.length >= MAX_STOCK_ROWS}
-        onClick={() => {
-          setRemoved(null);
+        onAdd={() => {
+          removal.forget();
           append({ length: "", price: "" }, { shouldFocus: true, focusName: `stock.${fields.length}.length` });
         }}
       >
         Add a stock length
-      </button>
+      </RowsFooter>
     </fieldset>
   );
 }

@@ -8,7 +8,7 @@ import { CalculatorFrame } from "./calculator-frame";
 import { convertLengths } from "./convert-units";
 import { MarksTable } from "./marks-table";
 import { MeasureField } from "./measure-field";
-import { CountReadout, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText } from "./readouts";
+import { CountReadout, FixFieldsNote, Readout, ReadoutGrid, RoundingNote, WarningList, lengthText } from "./readouts";
 import { SpacingDrawing } from "./spacing-drawing";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
@@ -121,7 +121,7 @@ export function EvenSpacingCalculator({ initial, start, compact = false, signedI
       <RoundingNote denominator={display.denominator} unit={display.unit} />
     </>
   ) : (
-    <p className="card p-4 text-ink-soft">Fix the highlighted {Object.keys(errors).length === 1 ? "field" : "fields"} to see the layout.</p>
+    <FixFieldsNote errorCount={Object.keys(errors).length} what="layout" />
   );
 
   return (
@@ -133,7 +133,7 @@ export function EvenSpacingCalculator({ initial, start, compact = false, signedI
       query={query}
       compact={compact}
       signedIn={signedIn}
-      sheetSummary={result ? summaryLine([["span", lengthText(result.span, display)], ["members", `${result.count} × ${lengthText(result.memberWidth, display)}`], ["ends", result.endCondition === "members" ? "members flush" : "gaps at posts"]]) : ""}
+      sheetSummary={result && [["span", lengthText(result.span, display)], ["members", `${result.count} × ${lengthText(result.memberWidth, display)}`], ["ends", result.endCondition === "members" ? "members flush" : "gaps at posts"]]}
     />
   );
 }

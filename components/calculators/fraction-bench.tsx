@@ -9,7 +9,6 @@ import { LumberSection } from "./fraction-bench-lumber";
 import { benchDisplay, FRACTION_BENCH_DEFAULTS, type FractionBenchValues } from "./fraction-bench-results";
 import { RoundSection } from "./fraction-bench-round";
 import { BenchSheet } from "./fraction-bench-sheet";
-import { summaryLine } from "./readouts";
 import { TapeReading } from "./tape-reading";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
@@ -87,10 +86,10 @@ export function FractionBench({ initial, start, compact = false, signedIn = fals
       query={query}
       compact={compact}
       signedIn={signedIn}
-      sheetSummary={summaryLine([
+      sheetSummary={[
         ["units", display.unit === "in" ? "inches" : "millimetres"],
         ["round to", display.unit === "in" ? `1/${display.denominator}"` : "1 mm"],
-      ])}
+      ]}
     />
   );
 }

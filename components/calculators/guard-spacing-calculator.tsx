@@ -11,7 +11,7 @@ import { convertLengths } from "./convert-units";
 import { GuardDrawing } from "./guard-drawing";
 import { MarksTable } from "./marks-table";
 import { MeasureField } from "./measure-field";
-import { CodeCaution, CountReadout, exactAndError, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText, type Display } from "./readouts";
+import { CodeCaution, CountReadout, FixFieldsNote, exactAndError, Readout, ReadoutGrid, RoundingNote, WarningList, lengthText, type Display } from "./readouts";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
 
@@ -139,7 +139,7 @@ export function GuardSpacingCalculator({ initial, start, compact = false, signed
     </>
   ) : (
     <>
-      <p className="card p-4 text-ink-soft">Fix the highlighted {Object.keys(errors).length > 1 ? "fields" : "field"} to see the layout.</p>
+      <FixFieldsNote errorCount={Object.keys(errors).length} what="layout" />
       {caution}
     </>
   );
@@ -154,13 +154,11 @@ export function GuardSpacingCalculator({ initial, start, compact = false, signed
       compact={compact}
       signedIn={signedIn}
       sheetSummary={
-        result
-          ? summaryLine([
-              ["span", `${lengthText(result.span, display)} between posts`],
-              ["balusters", `${result.count} × ${lengthText(result.memberWidth, display)}`],
-              ["openings under", limitText(result.maxOpening, display)],
-            ])
-          : ""
+        result && [
+          ["span", `${lengthText(result.span, display)} between posts`],
+          ["balusters", `${result.count} × ${lengthText(result.memberWidth, display)}`],
+          ["openings under", limitText(result.maxOpening, display)],
+        ]
       }
     />
   );

@@ -100,7 +100,11 @@ export function CodeCaution({ children }: { children?: ReactNode }) {
   );
 }
 
-/** The inputs as one line, for the top of the printed shop sheet. */
-export function summaryLine(parts: [string, string][]): string {
-  return parts.map(([k, v]) => `${k} ${v}`).join(" · ");
+/** In place of the results while the form has a mistake: the fields themselves say what is wrong. */
+export function FixFieldsNote({ errorCount, what }: { errorCount: number; what: string }) {
+  return (
+    <p className="card p-4 text-ink-soft">
+      Fix the highlighted {errorCount > 1 ? "fields" : "field"} to see the {what}.
+    </p>
+  );
 }

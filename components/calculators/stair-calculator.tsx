@@ -9,9 +9,8 @@ import { fieldErrorsFrom } from "@/lib/errors";
 import { CalculatorFrame } from "./calculator-frame";
 import { convertLengths } from "./convert-units";
 import { MeasureField } from "./measure-field";
-import { CodeCaution, CountReadout, Readout, ReadoutGrid, summaryLine, WarningList, lengthText, type Display } from "./readouts";
+import { CodeCaution, CountReadout, Readout, ReadoutGrid, WarningList, lengthText, type Display } from "./readouts";
 import { StairDrawing } from "./stair-drawing";
-import { OptionalMeasureField } from "./stair-optional-field";
 import { RulesOfThumbTable, StairRoundingNote, StepMarksTable } from "./stair-tables";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
@@ -105,10 +104,10 @@ export function StairCalculator({ initial, start, compact = false, signedIn = fa
       {treadsBy === "treadDepth" ? (
         <MeasureField label="Tread depth" registration={register("treadDepth")} value={values.treadDepth} {...field} error={errors.treadDepth} hint="riser face to riser face, without the nosing" />
       ) : null}
-      <OptionalMeasureField label="Tallest riser allowed" registration={register("maxRiser")} value={values.maxRiser} {...field} error={errors.maxRiser} whenBlank={`blank = ${codeText(CODE_MAX_RISER, display)} (IRC R311.7.5.1)`} />
-      <OptionalMeasureField label="Shallowest tread allowed" registration={register("minTread")} value={values.minTread} {...field} error={errors.minTread} whenBlank={`blank = ${codeText(CODE_MIN_TREAD, display)} (IRC R311.7.5.2)`} />
-      <OptionalMeasureField label="Riser to aim for" registration={register("targetRiser")} value={values.targetRiser} {...field} error={errors.targetRiser} whenBlank={`blank = the fewest risers under the tallest allowed; about ${codeText(new Fraction(7), display)} is comfortable`} />
-      <OptionalMeasureField label="Nosing" registration={register("nosing")} value={values.nosing} {...field} error={errors.nosing} whenBlank="blank = no nosing" />
+      <MeasureField optionalTag label="Tallest riser allowed" registration={register("maxRiser")} value={values.maxRiser} {...field} error={errors.maxRiser} whenBlank={`blank = ${codeText(CODE_MAX_RISER, display)} (IRC R311.7.5.1)`} />
+      <MeasureField optionalTag label="Shallowest tread allowed" registration={register("minTread")} value={values.minTread} {...field} error={errors.minTread} whenBlank={`blank = ${codeText(CODE_MIN_TREAD, display)} (IRC R311.7.5.2)`} />
+      <MeasureField optionalTag label="Riser to aim for" registration={register("targetRiser")} value={values.targetRiser} {...field} error={errors.targetRiser} whenBlank={`blank = the fewest risers under the tallest allowed; about ${codeText(new Fraction(7), display)} is comfortable`} />
+      <MeasureField optionalTag label="Nosing" registration={register("nosing")} value={values.nosing} {...field} error={errors.nosing} whenBlank="blank = no nosing" />
     </>
   );
 
@@ -164,14 +163,12 @@ export function StairCalculator({ initial, start, compact = false, signedIn = fa
       compact={compact}
       signedIn={signedIn}
       sheetSummary={
-        result
-          ? summaryLine([
-              ["total rise", lengthText(result.totalRise, display, "feet-inches")],
-              ["risers", `${result.riserCount} × ${lengthText(result.riserHeight.exact, display)}`],
-              ["treads", `${result.treadCount} × ${lengthText(result.treadDepth.exact, display)}`],
-              ["total run", lengthText(result.totalRun.exact, display, "feet-inches")],
-            ])
-          : ""
+        result && [
+          ["total rise", lengthText(result.totalRise, display, "feet-inches")],
+          ["risers", `${result.riserCount} × ${lengthText(result.riserHeight.exact, display)}`],
+          ["treads", `${result.treadCount} × ${lengthText(result.treadDepth.exact, display)}`],
+          ["total run", lengthText(result.totalRun.exact, display, "feet-inches")],
+        ]
       }
     />
   );

@@ -11,10 +11,10 @@ import { convertLengths } from "./convert-units";
 import { cutListHref } from "./cut-list-codec";
 import { MarksTable } from "./marks-table";
 import { MeasureField } from "./measure-field";
-import { CountReadout, Readout, ReadoutGrid, RoundingNote, summaryLine, WarningList, lengthText } from "./readouts";
+import { CountReadout, FixFieldsNote, Readout, ReadoutGrid, RoundingNote, WarningList, lengthText } from "./readouts";
 import { UnitPrecisionFields } from "./unit-precision-fields";
 import { flatCodec, useUrlForm, type SearchParamsRecord } from "./use-url-form";
-import { LengthListField, MemberWidthField, OptionalMeasureField, splitList } from "./wall-grid-fields";
+import { LengthListField, MemberWidthField, splitList } from "./wall-grid-fields";
 import { WallGridDrawing } from "./wall-grid-drawing";
 import { GridCutLists, PieceListTable, RailsTable, RowHeightsTable, StudCheckTable, WallGridWorking } from "./wall-grid-tables";
 
@@ -130,7 +130,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
         <legend className="mb-1 text-base font-semibold">Rails and base trim</legend>
         <MemberWidthField label="Top rail width" registration={register("topRailWidth")} value={values.topRailWidth} {...field} error={errors.topRailWidth} hint="0 for no top rail" onPick={pick("topRailWidth")} />
         <MemberWidthField label="Bottom rail width" registration={register("bottomRailWidth")} value={values.bottomRailWidth} {...field} error={errors.bottomRailWidth} hint="sits on the base trim" onPick={pick("bottomRailWidth")} />
-        <OptionalMeasureField label="Existing base trim height" registration={register("baseTrimHeight")} value={values.baseTrimHeight} {...field} error={errors.baseTrimHeight} blankMeans="no base trim" />
+        <MeasureField label="Existing base trim height" registration={register("baseTrimHeight")} value={values.baseTrimHeight} {...field} error={errors.baseTrimHeight} whenBlank="blank: no base trim" />
       </fieldset>
       <fieldset className="space-y-2">
         <legend className="mb-1 text-base font-semibold">Verticals (battens)</legend>
@@ -169,7 +169,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
           </p>
         </div>
         {values.rows.trim() !== "" && values.rows.trim() !== "0" ? (
-          <MemberWidthField label="Row rail width" registration={register("rowWidth")} value={values.rowWidth} {...field} error={errors.rowWidth} blankMeans="same as the verticals" onPick={pick("rowWidth")} />
+          <MemberWidthField label="Row rail width" registration={register("rowWidth")} value={values.rowWidth} {...field} error={errors.rowWidth} whenBlank="blank: same as the verticals" onPick={pick("rowWidth")} />
         ) : null}
       </fieldset>
       <fieldset className="space-y-1">
@@ -233,7 +233,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
       <RoundingNote denominator={display.denominator} unit={display.unit} />
     </div>
   ) : (
-    <p className="card p-4 text-ink-soft">Fix the highlighted {Object.keys(errors).length === 1 ? "field" : "fields"} to see the layout.</p>
+    <FixFieldsNote errorCount={Object.keys(errors).length} what="layout" />
   );
 
   const t = (v: Fraction) => lengthText(v, display);
@@ -247,15 +247,13 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
       compact={compact}
       signedIn={signedIn}
       sheetSummary={
-        result
-          ? summaryLine([
-              ["wall", `${t(result.wallWidth)} × ${t(result.wallHeight)}`],
-              ["verticals", `${result.verticals.length} × ${t(result.verticalLayout.memberWidth)}`],
-              ["rails", `top ${t(result.rails.top.width)}, bottom ${t(result.rails.bottom.width)}, base ${t(result.rails.bottom.bottom)}`],
-              ["rows", String(result.rows.length)],
-              ["studs", request?.studs ? `${t(request.studs.studSpacing ?? DEFAULT_STUD_SPACING)} o.c. from ${t(request.studs.firstStudCenter)}` : "not checked"],
-            ])
-          : ""
+        result && [
+          ["wall", `${t(result.wallWidth)} × ${t(result.wallHeight)}`],
+          ["verticals", `${result.verticals.length} × ${t(result.verticalLayout.memberWidth)}`],
+          ["rails", `top ${t(result.rails.top.width)}, bottom ${t(result.rails.bottom.width)}, base ${t(result.rails.bottom.bottom)}`],
+          ["rows", String(result.rows.length)],
+          ["studs", request?.studs ? `${t(request.studs.studSpacing ?? DEFAULT_STUD_SPACING)} o.c. from ${t(request.studs.firstStudCenter)}` : "not checked"],
+        ]
       }
     />
   );

@@ -40,21 +40,18 @@ type WidthProps = {
   hint?: string;
   /** Fills the field with a nominal board's actual width. */
   onPick: (text: string) => void;
-  /** Blank is allowed and means `blankMeans`. */
-  blankMeans?: string;
+  /** Blank is allowed; this says what it means (see MeasureField). */
+  whenBlank?: string;
 };
 
 /** A face-width field with a shortcut: pick 1x4 and the field gets 3 1/2″, still a typed length. */
-export function MemberWidthField({ label, registration, value, unit, denominator, error, hint, onPick, blankMeans }: WidthProps) {
+export function MemberWidthField({ label, registration, value, unit, denominator, error, hint, onPick, whenBlank }: WidthProps) {
   const pickerId = useId();
-  const field = blankMeans ? (
-    <OptionalMeasureField label={label} registration={registration} value={value} unit={unit} denominator={denominator} error={error} blankMeans={blankMeans} />
-  ) : (
-    <MeasureField label={label} registration={registration} value={value} unit={unit} denominator={denominator} error={error} hint={hint} />
-  );
   return (
     <div className="flex items-start gap-2">
-      <div className="min-w-0 flex-1">{field}</div>
+      <div className="min-w-0 flex-1">
+        <MeasureField label={label} registration={registration} value={value} unit={unit} denominator={denominator} error={error} hint={hint} whenBlank={whenBlank} />
+      </div>
       <div className="w-24 shrink-0">
         <label htmlFor={pickerId} className="mb-1 block text-sm font-semibold">
           <span className="sr-only">{label}: </span>Board
@@ -76,35 +73,6 @@ export function MemberWidthField({ label, registration, value, unit, denominator
           ))}
         </select>
       </div>
-    </div>
-  );
-}
-
-type OptionalProps = {
-  label: string;
-  registration: UseFormRegisterReturn;
-  value: string;
-  unit: Unit;
-  denominator: number;
-  error?: string;
-  blankMeans: string;
-};
-
-/** Like MeasureField, but an empty box is an answer ("no base trim"), not a mistake. */
-export function OptionalMeasureField({ label, registration, value, unit, denominator, error, blankMeans }: OptionalProps) {
-  const id = useId();
-  const parsed = value.trim() === "" ? null : parseMeasure(value, unit);
-  const problem = parsed && !parsed.ok ? parsed.error.message : error;
-  const reading = parsed && parsed.ok ? formatMeasure(parsed.value, { unit, denominator: Math.max(denominator, 64), style: unit === "in" ? "feet-inches" : undefined, mmDecimals: 1 }).text : null;
-  return (
-    <div>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold">
-        {label}
-      </label>
-      <input id={id} type="text" autoComplete="off" spellCheck={false} className="input measure" aria-invalid={problem ? true : undefined} aria-describedby={`${id}-reading`} {...registration} />
-      <p id={`${id}-reading`} aria-live="polite" className={`mt-1 min-h-5 text-xs ${problem ? "font-semibold text-danger" : "text-ink-soft"}`}>
-        {problem ? problem : reading ? <>reads as <span className="measure">{reading}</span></> : `blank: ${blankMeans}`}
-      </p>
     </div>
   );
 }

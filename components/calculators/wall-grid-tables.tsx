@@ -1,12 +1,10 @@
 import type { Fraction } from "@/lib/layout/core";
 import type { GridCutList, RailPlan, WallGridResult } from "@/lib/layout/wall-grid";
 import { CutListBoards } from "./cut-list-boards";
-import { BoardsSummaryTable, BuyTable, CutListVerdict } from "./cut-list-tables";
+import { BoardsSummaryTable, BuyTable, cutListVerdict, CutListVerdict } from "./cut-list-tables";
+import { cell, DataTable, measureCell, rowLine } from "./data-table";
 import { lengthText, type Display } from "./readouts";
 import { nominalName } from "./wall-grid-fields";
-
-const th = "px-3 py-2";
-const td = "px-3 py-1.5";
 
 export function faceWidthText(width: Fraction, display: Display): string {
   const nominal = nominalName(width);
@@ -49,39 +47,18 @@ const KIND_NAME: Record<string, string> = { "top-rail": "Top rail", "bottom-rail
 
 export function PieceListTable({ result, display }: { result: WallGridResult; display: Display }) {
   return (
-    <div className="card overflow-x-auto">
-      <table className="w-full text-left text-sm">
-        <caption className="px-3 pt-2 text-left text-sm font-semibold">Pieces to cut</caption>
-        <thead className="border-b border-rule bg-paper-sunk">
-          <tr>
-            <th scope="col" className={th}>
-              Piece
-            </th>
-            <th scope="col" className={th}>
-              Face width
-            </th>
-            <th scope="col" className={th}>
-              Cut length
-            </th>
-            <th scope="col" className={th}>
-              Qty
-            </th>
-          </tr>
-        </thead>
-        <tbody className="measure whitespace-nowrap">
-          {result.pieces.map((piece, i) => (
-            <tr key={i} className="border-b border-rule last:border-0">
-              <th scope="row" className={`${td} font-sans`}>
-                {KIND_NAME[piece.kind]}
-              </th>
-              <td className={td}>{faceWidthText(piece.memberWidth, display)}</td>
-              <td className={td}>{lengthText(piece.length, display)}</td>
-              <td className={td}>{piece.quantity}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable caption="Pieces to cut" columns={["Piece", "Face width", "Cut length", "Qty"]} bodyClassName="measure whitespace-nowrap">
+      {result.pieces.map((piece, i) => (
+        <tr key={i} className={rowLine}>
+          <th scope="row" className={`${cell} font-sans`}>
+            {KIND_NAME[piece.kind]}
+          </th>
+          <td className={cell}>{faceWidthText(piece.memberWidth, display)}</td>
+          <td className={cell}>{lengthText(piece.length, display)}</td>
+          <td className={cell}>{piece.quantity}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }
 
@@ -90,47 +67,29 @@ export function StudCheckTable({ result, display }: { result: WallGridResult; di
   const studAt = (index: number) => result.studs.find((s) => s.index === index)!;
   return (
     <div className="space-y-2">
-      <div className="card overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <caption className="px-3 pt-2 text-left text-sm font-semibold">Verticals over the studs</caption>
-          <thead className="border-b border-rule bg-paper-sunk">
-            <tr>
-              <th scope="col" className={th}>
-                Vertical
-              </th>
-              <th scope="col" className={th}>
-                Centre
-              </th>
-              <th scope="col" className={th}>
-                Behind it
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {result.verticals.map((v) => (
-              <tr key={v.index} data-stud-check={v.landsOnStud ? "on" : "misses"} className={`border-b border-rule last:border-0 ${v.landsOnStud ? "" : "bg-danger-bg"}`}>
-                <th scope="row" className={`${td} measure`}>
-                  {v.index}
-                </th>
-                <td className={`${td} measure whitespace-nowrap`}>{lengthText(v.centerMark.exact, display)}</td>
-                <td className={td}>
-                  {v.landsOnStud ? (
-                    <>
-                      {v.studs.map((s, i) => (
-                        <span key={s} className="inline-block whitespace-nowrap">
-                          {i > 0 ? ", " : ""}stud {s} <span className="measure">(centre {lengthText(studAt(s).centerMark.exact, display)})</span>
-                        </span>
-                      ))}
-                    </>
-                  ) : (
-                    <strong className="whitespace-nowrap text-danger">▲ misses every stud</strong>
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable caption="Verticals over the studs" columns={["Vertical", "Centre", "Behind it"]}>
+        {result.verticals.map((v) => (
+          <tr key={v.index} data-stud-check={v.landsOnStud ? "on" : "misses"} className={`${rowLine} ${v.landsOnStud ? "" : "bg-danger-bg"}`}>
+            <th scope="row" className={`${cell} measure`}>
+              {v.index}
+            </th>
+            <td className={measureCell}>{lengthText(v.centerMark.exact, display)}</td>
+            <td className={cell}>
+              {v.landsOnStud ? (
+                <>
+                  {v.studs.map((s, i) => (
+                    <span key={s} className="inline-block whitespace-nowrap">
+                      {i > 0 ? ", " : ""}stud {s} <span className="measure">(centre {lengthText(studAt(s).centerMark.exact, display)})</span>
+                    </span>
+                  ))}
+                </>
+              ) : (
+                <strong className="whitespace-nowrap text-danger">▲ misses every stud</strong>
+              )}
+            </td>
+          </tr>
+        ))}
+      </DataTable>
       <p className="text-xs text-ink-soft">
         Stud centres from the left end: <span className="measure">{result.studs.map((s) => lengthText(s.centerMark.exact, display)).join(", ")}</span>. A vertical counts
         as on a stud when at least 1/2″ of it lies over the stud&apos;s 1 1/2″ face.
@@ -148,39 +107,18 @@ export function StudCheckTable({ result, display }: { result: WallGridResult; di
 
 export function RowHeightsTable({ result, display }: { result: WallGridResult; display: Display }) {
   return (
-    <div className="card overflow-x-auto">
-      <table className="w-full text-left text-sm">
-        <caption className="px-3 pt-2 text-left text-sm font-semibold">Row rails, measured up from the floor</caption>
-        <thead className="border-b border-rule bg-paper-sunk">
-          <tr>
-            <th scope="col" className={th}>
-              Row
-            </th>
-            <th scope="col" className={th}>
-              Bottom edge
-            </th>
-            <th scope="col" className={th}>
-              Centre
-            </th>
-            <th scope="col" className={th}>
-              Top edge
-            </th>
-          </tr>
-        </thead>
-        <tbody className="measure whitespace-nowrap">
-          {result.rows.map((row) => (
-            <tr key={row.index} className="border-b border-rule last:border-0">
-              <th scope="row" className={td}>
-                {row.index}
-              </th>
-              <td className={td}>{lengthText(row.bottomMark.exact, display)}</td>
-              <td className={td}>{lengthText(row.centerMark.exact, display)}</td>
-              <td className={td}>{lengthText(row.topMark.exact, display)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable caption="Row rails, measured up from the floor" columns={["Row", "Bottom edge", "Centre", "Top edge"]} bodyClassName="measure whitespace-nowrap">
+      {result.rows.map((row) => (
+        <tr key={row.index} className={rowLine}>
+          <th scope="row" className={cell}>
+            {row.index}
+          </th>
+          <td className={cell}>{lengthText(row.bottomMark.exact, display)}</td>
+          <td className={cell}>{lengthText(row.centerMark.exact, display)}</td>
+          <td className={cell}>{lengthText(row.topMark.exact, display)}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }
 
@@ -198,44 +136,25 @@ export function RailsTable({ result, display }: { result: WallGridResult; displa
   // On paper the rails only need a line of their own when they are cut in pieces.
   const split = rails.some((rail) => rail.pieces.length > 1);
   return (
-    <div className={`card overflow-x-auto ${split ? "" : "print:hidden"}`}>
-      <table className="w-full text-left text-sm">
-        <caption className="px-3 pt-2 text-left text-sm font-semibold">Rails across the full width</caption>
-        <thead className="border-b border-rule bg-paper-sunk">
-          <tr>
-            <th scope="col" className={th}>
-              Rail
-            </th>
-            <th scope="col" className={th}>
-              From the floor
-            </th>
-            <th scope="col" className={th}>
-              Cut
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {rails.map((rail) => (
-            <tr key={rail.label} className="border-b border-rule align-top last:border-0" data-rail={rail.label}>
-              <th scope="row" className={`${td} whitespace-nowrap`}>
-                {rail.label === "top rail" ? "Top rail" : "Bottom rail"}
-              </th>
-              <td className={`${td} measure whitespace-nowrap`}>
-                {lengthText(rail.bottom, display)} to {lengthText(rail.top, display)}
-              </td>
-              <td className={`${td} min-w-48`}>{railLine(rail, display, result.studs.length > 0)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable caption="Rails across the full width" columns={["Rail", "From the floor", "Cut"]} className={split ? "" : "print:hidden"}>
+      {rails.map((rail) => (
+        <tr key={rail.label} className={`${rowLine} align-top`} data-rail={rail.label}>
+          <th scope="row" className={`${cell} whitespace-nowrap`}>
+            {rail.label === "top rail" ? "Top rail" : "Bottom rail"}
+          </th>
+          <td className={measureCell}>
+            {lengthText(rail.bottom, display)} to {lengthText(rail.top, display)}
+          </td>
+          <td className={`${cell} min-w-48`}>{railLine(rail, display, result.studs.length > 0)}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }
 
 function buyLine(list: GridCutList, display: Display): string {
   const buy = list.result.byStock.map((s) => `${s.count} × ${lengthText(s.stockLength, display, "feet-inches")}`).join(", ");
-  const verdict = list.result.optimal ? "proven fewest" : list.result.boardCount === list.result.lowerBound ? "fewest boards" : "good, not proven";
-  return `buy ${buy} · ${verdict} · waste ${list.result.wastePercent.toFixed(1)}%`;
+  return `buy ${buy} · ${cutListVerdict(list.result).words} · waste ${list.result.wastePercent.toFixed(1)}%`;
 }
 
 /** One cut list per face width, each with a link that opens it in the cut-list calculator. */
