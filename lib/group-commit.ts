@@ -1,35 +1,63 @@
 // Graded answers are the busiest write. Sequelize opens a fresh SQLite connection for every
-// transaction and awaits each statement, so under load one try held the write lock for many
-// turns of a busy event loop. Here the tries that arrive together share one transaction on one
-// long-lived connection: their statements run back to back in SQLite's own thread, and each
-// try is acknowledged only after the COMMIT that holds it (the journal is synced as usual).
+// transaction and awaits each statement, and every statement of node-sqlite3 costs a turn of
+// the event loop, which is slow while the server is busy. So the tries that arrive together
+// share one transaction on one long-lived connection, written with a fixed four statements
+// however many tries there are: BEGIN, one compare-and-set UPDATE … RETURNING for all of them,
+// one INSERT of the rows of those whose guard held, COMMIT. Each try is acknowledged only after
+// the COMMIT that holds it (the journal is synced as usual).
 import path from "node:path";
 import sqlite3 from "sqlite3";
 import { CONNECTION_PRAGMAS } from "@/lib/db";
 import { env } from "@/lib/env";
 
-type Statement = { sql: string; params: unknown[] };
+type Value = string | number | null;
 
 /**
- * Rows to insert only if `guard` (an UPDATE) changes exactly one row — a compare-and-set: the
- * rows are written when the guarded row was still as expected, and nothing is written otherwise.
+ * A compare-and-set on one row plus the rows that go with it: if the row `id` of `table` still
+ * has the `expect`ed values, it gets the `set` values and `rows` are inserted into `into`;
+ * otherwise nothing is written. Every write of one kind uses the same tables and columns.
  */
-export type GuardedInsert = { guard: Statement; table: string; columns: string[]; rows: unknown[][] };
+export type GuardedInsert = {
+  table: string;
+  id: string;
+  expect: Record<string, Value>;
+  set: Record<string, Value>;
+  into: { table: string; columns: string[]; rows: Value[][] };
+};
 
 type Job = { write: GuardedInsert; resolve: (written: boolean) => void; reject: (error: Error) => void };
 
-function insertAfterGuard({ table, columns, rows }: GuardedInsert): Statement {
-  const row = `(${columns.map(() => "?").join(", ")})`;
-  // changes() still reports the guard, the last statement that completed on this connection.
-  return {
-    sql: `INSERT INTO ${table} (${columns.join(", ")}) SELECT * FROM (VALUES ${rows.map(() => row).join(", ")}) WHERE changes() = 1`,
-    params: rows.flat(),
-  };
-}
+// Far under SQLite's limit on bound values, and more tries than ever arrive at once.
+const MAX_BATCH = 100;
 
 /** SQLite text for a date, as Sequelize writes it, so models read these rows back as Dates. */
 export function sqliteDate(date: Date): string {
   return date.toISOString().replace("T", " ").replace("Z", " +00:00");
+}
+
+const shapeOf = (w: GuardedInsert) => JSON.stringify([w.table, Object.keys(w.expect), Object.keys(w.set), w.into.table, w.into.columns]);
+
+/** One UPDATE for every guarded row: each column set per id by CASE, the ids that held returned. */
+function guardStatement(writes: GuardedInsert[]): { sql: string; params: Value[] } {
+  const [first] = writes;
+  const params: Value[] = [];
+  const sets = Object.keys(first.set).map((column) => {
+    const cases = writes.map((w) => (params.push(w.id, w.set[column]), "WHEN ? THEN ?")).join(" ");
+    return `${column} = CASE id ${cases} END`;
+  });
+  const guards = writes.map((w) => {
+    params.push(w.id);
+    const checks = Object.entries(w.expect).map(([column, value]) => (params.push(value), `${column} = ?`));
+    return `(id = ? AND ${checks.join(" AND ")})`;
+  });
+  return { sql: `UPDATE ${first.table} SET ${sets.join(", ")} WHERE ${guards.join(" OR ")} RETURNING id`, params };
+}
+
+function insertStatement(writes: GuardedInsert[]): { sql: string; params: Value[] } {
+  const { table, columns } = writes[0].into;
+  const rows = writes.flatMap((w) => w.into.rows);
+  const row = `(${columns.map(() => "?").join(", ")})`;
+  return { sql: `INSERT INTO ${table} (${columns.join(", ")}) VALUES ${rows.map(() => row).join(", ")}`, params: rows.flat() };
 }
 
 class GroupCommit {
@@ -40,7 +68,7 @@ class GroupCommit {
   constructor(private readonly file: string) {}
 
   write(write: GuardedInsert): Promise<boolean> {
-    if (write.rows.length === 0) return Promise.reject(new Error("a guarded insert needs at least one row"));
+    if (write.into.rows.length === 0) return Promise.reject(new Error("a guarded insert needs at least one row"));
     return new Promise((resolve, reject) => {
       this.pending.push({ write, resolve, reject });
       if (!this.flushing) void this.flush();
@@ -62,7 +90,7 @@ class GroupCommit {
     this.flushing = true;
     try {
       while (this.pending.length > 0) {
-        const batch = this.pending.splice(0);
+        const batch = this.takeBatch();
         try {
           await this.commit(batch);
         } catch {
@@ -75,39 +103,40 @@ class GroupCommit {
     }
   }
 
+  /** Pending jobs of one shape, at most one per guarded row (a second try at a row waits for the next batch). */
+  private takeBatch(): Job[] {
+    const shape = shapeOf(this.pending[0].write);
+    const batch: Job[] = [];
+    const rows = new Set<string>();
+    this.pending = this.pending.filter((job) => {
+      if (batch.length >= MAX_BATCH || shapeOf(job.write) !== shape || rows.has(job.write.id)) return true;
+      rows.add(job.write.id);
+      batch.push(job);
+      return false;
+    });
+    return batch;
+  }
+
   /** One transaction for the batch; resolves every job after COMMIT, or throws having rolled back. */
   private async commit(batch: Job[]): Promise<void> {
     const db = await this.open();
-    const changed: number[] = [];
-    let failure: Error | null = null;
-    const note = (error: Error | null) => (failure ??= error);
-    await new Promise<void>((done) => {
-      db.serialize(() => {
-        db.run("BEGIN IMMEDIATE", note);
-        batch.forEach((job, i) => {
-          db.run(job.write.guard.sql, job.write.guard.params, function (this: sqlite3.RunResult, error) {
-            note(error);
-            changed[i] = error ? 0 : this.changes;
-          });
-          const insert = insertAfterGuard(job.write);
-          db.run(insert.sql, insert.params, note);
-        });
-        // Statements queued above run in order; this one's callback comes after all of theirs.
-        db.run("SELECT 1", () => done());
-      });
-    });
-    const end = (sql: string) => new Promise<void>((resolve, reject) => db.run(sql, (error) => (error ? reject(error) : resolve())));
-    if (failure) {
-      await end("ROLLBACK").catch(() => undefined);
-      throw failure;
-    }
+    const run = (sql: string, params: Value[] = []) => new Promise<void>((resolve, reject) => db.run(sql, params, (error) => (error ? reject(error) : resolve())));
+    const all = (sql: string, params: Value[]) => new Promise<{ id: string }[]>((resolve, reject) => db.all<{ id: string }>(sql, params, (error, rows) => (error ? reject(error) : resolve(rows))));
+    await run("BEGIN IMMEDIATE");
     try {
-      await end("COMMIT");
+      const guard = guardStatement(batch.map((j) => j.write));
+      const held = new Set((await all(guard.sql, guard.params)).map((r) => r.id));
+      const written = batch.filter((j) => held.has(j.write.id)).map((j) => j.write);
+      if (written.length > 0) {
+        const insert = insertStatement(written);
+        await run(insert.sql, insert.params);
+      }
+      await run("COMMIT");
+      batch.forEach((job) => job.resolve(held.has(job.write.id)));
     } catch (error) {
-      await end("ROLLBACK").catch(() => undefined);
+      await run("ROLLBACK").catch(() => undefined);
       throw error;
     }
-    batch.forEach((job, i) => job.resolve(changed[i] === 1));
   }
 }
 

@@ -123,28 +123,31 @@ export async function submitAnswers(owner: PracticeOwner, id: string, submission
   const status = solved ? "solved" : used >= problem.attemptsAllowed ? "failed" : "open";
   const now = new Date();
   const written = await guardedInsert({
-    guard: {
-      sql: "UPDATE practice_problems SET attempts_used = ?, status = ?, finished_at = ?, updated_at = ? WHERE id = ? AND status = 'open' AND attempts_used = ?",
-      params: [used, status, status === "open" ? null : sqliteDate(now), sqliteDate(now), id, problem.attemptsUsed],
+    table: "practice_problems",
+    id,
+    // The try count read above must still hold: a second try racing this one is refused.
+    expect: { status: "open", attempts_used: problem.attemptsUsed },
+    set: { attempts_used: used, status, finished_at: status === "open" ? null : sqliteDate(now), updated_at: sqliteDate(now) },
+    into: {
+      table: "attempts",
+      columns: ["problem_id", "user_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "pattern", "time_ms", "created_at"],
+      rows: open.map((part) => [
+        id,
+        owner.user?.id ?? null,
+        kind.key,
+        problem.level,
+        problem.seed,
+        used,
+        part.key,
+        submission.answers[part.key].trim().slice(0, MAX_ANSWER_LENGTH),
+        grades[part.key].value.toFraction(),
+        expected[part.key].toFraction(),
+        grades[part.key].verdict,
+        grades[part.key].pattern,
+        submission.timeMs ?? null,
+        sqliteDate(now),
+      ]),
     },
-    table: "attempts",
-    columns: ["problem_id", "user_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "pattern", "time_ms", "created_at"],
-    rows: open.map((part) => [
-      id,
-      owner.user?.id ?? null,
-      kind.key,
-      problem.level,
-      problem.seed,
-      used,
-      part.key,
-      submission.answers[part.key].trim().slice(0, MAX_ANSWER_LENGTH),
-      grades[part.key].value.toFraction(),
-      expected[part.key].toFraction(),
-      grades[part.key].verdict,
-      grades[part.key].pattern,
-      submission.timeMs ?? null,
-      sqliteDate(now),
-    ]),
   });
   if (!written) throw new AppError("conflict", "These answers crossed with another try at the same problem. Reload to see where it stands.");
   if (solved && owner.user && lessonSlugs().includes(kind.lesson.slug)) {
