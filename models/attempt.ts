@@ -1,11 +1,13 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 import type { PracticeProblem } from "./practice-problem";
+import type { AssignmentItem } from "./assignment-item";
 import type { User } from "./user";
 
 export class Attempt extends Model<InferAttributes<Attempt>, InferCreationAttributes<Attempt>> {
   declare id: CreationOptional<number>;
   declare problemId: ForeignKey<PracticeProblem["id"]>;
   declare userId: ForeignKey<User["id"]> | null;
+  declare assignmentItemId: CreationOptional<ForeignKey<AssignmentItem["id"]> | null>;
   declare kind: string;
   declare level: number;
   declare seed: number;

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { AssignmentItem } from "./assignment-item";
 import type { User } from "./user";
 
 export const PROBLEM_STATUSES = ["open", "solved", "failed"] as const;
@@ -8,6 +9,9 @@ export class PracticeProblem extends Model<InferAttributes<PracticeProblem>, Inf
   declare id: string;
   declare userId: ForeignKey<User["id"]> | null;
   declare visitorId: string | null;
+  /** Set when this problem is one student's variant of an assignment item. */
+  declare assignmentItemId: CreationOptional<ForeignKey<AssignmentItem["id"]> | null>;
+  declare variant: CreationOptional<number | null>;
   declare kind: string;
   declare level: number;
   declare seed: number;
@@ -23,6 +27,7 @@ export class PracticeProblem extends Model<InferAttributes<PracticeProblem>, Inf
       {
         id: { type: DataTypes.STRING(36), primaryKey: true },
         visitorId: { type: DataTypes.STRING(36), allowNull: true },
+        variant: { type: DataTypes.INTEGER, allowNull: true },
         kind: { type: DataTypes.STRING(40), allowNull: false },
         level: { type: DataTypes.INTEGER, allowNull: false },
         seed: { type: DataTypes.INTEGER, allowNull: false },

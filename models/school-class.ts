@@ -7,6 +7,7 @@ export class SchoolClass extends Model<InferAttributes<SchoolClass>, InferCreati
   declare name: string;
   declare term: string;
   declare program: CreationOptional<string | null>;
+  declare sectionCode: CreationOptional<string | null>;
   declare joinCode: string;
   declare instructorId: ForeignKey<User["id"]>;
   declare archivedAt: CreationOptional<Date | null>;
@@ -20,6 +21,7 @@ export class SchoolClass extends Model<InferAttributes<SchoolClass>, InferCreati
         name: { type: DataTypes.STRING(160), allowNull: false },
         term: { type: DataTypes.STRING(60), allowNull: false },
         program: { type: DataTypes.STRING(160), allowNull: true },
+        sectionCode: { type: DataTypes.STRING(20), allowNull: true },
         joinCode: { type: DataTypes.STRING(12), allowNull: false, unique: true },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,

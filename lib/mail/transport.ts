@@ -1,0 +1,30 @@
+import "server-only";
+import nodemailer, { type Transporter } from "nodemailer";
+import { env } from "@/lib/env";
+
+const LOOPBACK = new Set(["127.0.0.1", "localhost", "::1", "[::1]"]);
+
+/** SMTP options from SMTP_URL; a catcher on loopback speaks plain SMTP, so STARTTLS is not asked for there. */
+export function smtpOptions(url: string) {
+  const parsed = new URL(url);
+  const secure = parsed.protocol === "smtps:";
+  return {
+    host: parsed.hostname,
+    port: Number(parsed.port || (secure ? 465 : 587)),
+    secure,
+    ignoreTLS: !secure && LOOPBACK.has(parsed.hostname),
+    auth: parsed.username ? { user: decodeURIComponent(parsed.username), pass: decodeURIComponent(parsed.password) } : undefined,
+    // A dead SMTP server must fail a send quickly, so the outbox can retry it later.
+    connectionTimeout: 5_000,
+    greetingTimeout: 5_000,
+    socketTimeout: 10_000,
+  };
+}
+
+const holder = globalThis as typeof globalThis & { __sixteenthsMail?: { url: string; transport: Transporter } };
+
+export function transport(): Transporter {
+  const url = env().SMTP_URL;
+  if (holder.__sixteenthsMail?.url !== url) holder.__sixteenthsMail = { url, transport: nodemailer.createTransport(smtpOptions(url)) };
+  return holder.__sixteenthsMail.transport;
+}
