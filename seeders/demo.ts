@@ -1,3 +1,4 @@
+import crypto from "node:crypto";
 import bcrypt from "bcryptjs";
 import type { Database } from "@/lib/db";
 import type { Role } from "@/models";
@@ -41,13 +42,66 @@ export const DEMO_CLASS = {
   term: "Spring 2027",
   program: "Carpentry & Joinery · Harbor Ridge Technical College",
   joinCode: "HRTC110",
+  sectionCode: "A",
 };
+
+/** People invited to CARP 110 who have not accepted yet: the roster shows them as "invited". */
+export const DEMO_INVITED = [
+  { name: "Sofia Lindgren", email: "sofia.lindgren@students.harborridge.example" },
+  { name: "Tomas Achebe", email: "tomas.achebe@students.harborridge.example" },
+  { name: "Uma Kowalczyk", email: "uma.kowalczyk@students.harborridge.example" },
+];
+
+const DAY = 24 * 60 * 60 * 1000;
+
+/**
+ * CARP 110's assignments, dated from the day the demo is first seeded so there is always one past
+ * due, one due soon and one later. Kinds and levels follow the course order.
+ */
+export const DEMO_ASSIGNMENTS = [
+  {
+    title: "Even spacing on the hallway wall",
+    instructions: "Work each layout on paper first: subtract the members, divide by the **spaces**, round once to 1/16\".\n\nShow the marks from the left end.",
+    opensIn: -14, dueIn: -3, latePolicy: "penalty" as const, latePenaltyPercent: 10, lateUntilIn: null, reveal: "when-final" as const, status: "published" as const,
+    items: [
+      { kind: "even-gap", level: 2, problemCount: 3, points: 4 },
+      { kind: "mark-position", level: 2, problemCount: 2, points: 4 },
+    ],
+  },
+  {
+    title: "Battens and rails for the 141 1/2\" wall",
+    instructions: "Deduct the base trim and both rails before you cut a single batten.",
+    opensIn: -4, dueIn: 1, latePolicy: "until" as const, latePenaltyPercent: null, lateUntilIn: 4, reveal: "when-final" as const, status: "published" as const,
+    items: [
+      { kind: "batten-length", level: 2, problemCount: 2, points: 5 },
+      { kind: "bay-rail", level: 2, problemCount: 2, points: 5 },
+    ],
+  },
+  {
+    title: "Stock to buy: boards, kerf and offcuts",
+    instructions: "Allow 1/8\" for every saw kerf. Board feet to the nearest quarter.",
+    opensIn: 0, dueIn: 10, latePolicy: "none" as const, latePenaltyPercent: null, lateUntilIn: null, reveal: "after-due" as const, status: "published" as const,
+    items: [
+      { kind: "stock-boards", level: 2, problemCount: 2, points: 6 },
+      { kind: "lumber-board-feet", level: 1, problemCount: 2, points: 4 },
+    ],
+  },
+  {
+    title: "Porch guard and the 104 3/4\" stair",
+    instructions: "Check every opening against the 4\" sphere rule and every riser against your local code.",
+    opensIn: 12, dueIn: 21, latePolicy: "none" as const, latePenaltyPercent: null, lateUntilIn: null, reveal: "when-final" as const, status: "draft" as const,
+    items: [
+      { kind: "fewest-members", level: 2, problemCount: 2, points: 5 },
+      { kind: "stair-risers", level: 2, problemCount: 2, points: 5 },
+    ],
+  },
+];
 
 export type DemoLogin = { email: string; role: Role; note: string };
 
 /** Idempotent: finds before it creates, so a second run changes nothing. */
 export async function seedDemo({ sequelize, models }: Database, cost: number): Promise<DemoLogin[]> {
-  const { User, SchoolClass, Enrollment, ClassInstructor } = models;
+  const { User, SchoolClass, Enrollment, ClassInstructor, Invitation, Assignment, AssignmentItem } = models;
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, cost);
 
   await sequelize.transaction(async (transaction) => {
@@ -70,6 +124,43 @@ export async function seedDemo({ sequelize, models }: Database, cost: number): P
     for (const student of DEMO_STUDENTS) {
       const user = await ensureUser(student.name, student.email, "student");
       await Enrollment.findOrCreate({ where: { classId: carp110.id, studentId: user.id }, defaults: { status: "active" }, transaction });
+    }
+    const now = Date.now();
+    for (const person of DEMO_INVITED) {
+      // Only a hash is ever stored; nobody holds these links, so the instructor can resend them from the roster.
+      await Invitation.findOrCreate({
+        where: { classId: carp110.id, email: person.email },
+        defaults: { ...person, tokenHash: crypto.createHash("sha256").update(crypto.randomBytes(32)).digest("hex"), invitedBy: carp110.instructorId, expiresAt: new Date(now + 7 * DAY) },
+        transaction,
+      });
+    }
+    for (const [index, a] of DEMO_ASSIGNMENTS.entries()) {
+      const existing = await Assignment.findOne({ where: { classId: carp110.id, title: a.title }, transaction });
+      if (existing) continue;
+      const opensAt = new Date(now + a.opensIn * DAY);
+      const created = await Assignment.create(
+        {
+          classId: carp110.id,
+          title: a.title,
+          instructions: a.instructions,
+          opensAt,
+          // Due at 5 pm UTC, the end of a shop day somewhere in the Americas.
+          dueAt: new Date(new Date(now + a.dueIn * DAY).setUTCHours(17, 0, 0, 0)),
+          latePolicy: a.latePolicy,
+          lateUntil: a.lateUntilIn === null ? null : new Date(new Date(now + a.lateUntilIn * DAY).setUTCHours(17, 0, 0, 0)),
+          latePenaltyPercent: a.latePenaltyPercent,
+          attemptsAllowed: 3,
+          reveal: a.reveal,
+          status: a.status,
+          publishedAt: a.status === "published" ? new Date(opensAt.getTime() - (index + 1) * 60_000) : null,
+          createdBy: carp110.instructorId,
+        },
+        { transaction },
+      );
+      await AssignmentItem.bulkCreate(
+        a.items.map((item, position) => ({ ...item, assignmentId: created.id, position, tolerance: "half" as const })),
+        { transaction },
+      );
     }
   });
 
