@@ -45,9 +45,10 @@ export function ForgotPasswordForm({ initialEmail }: { initialEmail: string }) {
       <div className="space-y-4">
         <Alert tone="success">{sent}</Alert>
         <p className="text-ink-soft">
-          Sent to the address you typed: <span className="break-all font-semibold text-ink">{getValues("email")}</span>
+          You typed <span className="break-all font-semibold text-ink">{getValues("email")}</span>. The link works once, for one hour. Nothing
+          there after a few minutes? Check the spam folder, then ask again.
         </p>
-        <div className="flex flex-wrap gap-3">
+        <div className="flex flex-col gap-3 sm:flex-row">
           <Link href="/signin" className="btn-primary">
             Back to sign in
           </Link>

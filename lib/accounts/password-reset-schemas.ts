@@ -7,8 +7,7 @@ export const resetRequestSchema = z.object({ email: emailSchema });
 export type ResetRequestInput = z.input<typeof resetRequestSchema>;
 
 /** What the request answers for every address, known or not, so nobody can learn who has an account. */
-export const RESET_REQUESTED_MESSAGE =
-  "If an account uses that address, a link to choose a new password is on its way. It works once, for one hour. Nothing there after a few minutes? Check the spam folder, then ask again.";
+export const RESET_REQUESTED_MESSAGE = "If an account uses that address, a link to choose a new password is on its way.";
 
 const tokenSchema = z
   .string({ error: "The link is missing its code. Open it from the e-mail again." })

@@ -41,7 +41,7 @@ export default async function ResetPasswordPage({ params }: PageProps<"/reset-pa
           <h1 className="text-2xl">{spent.heading}</h1>
           <p className="text-ink-soft">{spent.body}</p>
         </div>
-        <div className="flex flex-wrap gap-3">
+        <div className="flex flex-col gap-3 sm:flex-row">
           <Link href={askAgain} className="btn-primary">
             Ask for a new link
           </Link>
