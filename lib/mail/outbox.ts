@@ -10,7 +10,7 @@ import { transport as defaultTransport } from "./transport";
 // A send that fails is retried with a growing wait; the action that asked for the mail has
 // already committed and is never undone by a mail failure.
 
-/** With the waits below, the last try comes about six hours after the first: long enough to ride out an SMTP outage. */
+/** With the waits below, the last try comes about four hours after the first: long enough to ride out an SMTP outage. */
 const MAX_TRIES = 12;
 const BATCH = 25;
 /** A row claimed by a process that then died is claimed again after this long. */
