@@ -2,9 +2,10 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
+import { useSearchParams } from "next/navigation";
 import { signIn } from "next-auth/react";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { signInSchema } from "@/lib/accounts/schemas";
 import { Alert } from "@/components/ui/alert";
@@ -18,11 +19,15 @@ const WRONG_CREDENTIALS = "That e-mail and password do not match an account. Che
 export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string; initialError?: string }) {
   const [formError, setFormError] = useState<string | undefined>(initialError ? describe(initialError) : undefined);
   const hydrated = useHydrated();
+  // Filled in after a password reset, which knows the account's address.
+  const initialEmail = useSearchParams().get("email")?.slice(0, 254) ?? "";
   const {
     register,
     handleSubmit,
+    control,
     formState: { errors, isSubmitting },
-  } = useForm<Values>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
+  } = useForm<Values>({ resolver: zodResolver(signInSchema), defaultValues: { email: initialEmail, password: "" } });
+  const typedEmail = (useWatch({ control, name: "email" }) ?? "").trim();
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(undefined);
@@ -44,7 +49,12 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string;
       ) : null}
       <fieldset disabled={!hydrated} className="min-w-0 space-y-4">
         <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={errors.email?.message} {...register("email")} />
-        <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
+        <div className="space-y-1">
+          <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
+          <p className="text-right text-sm">
+            <Link href={typedEmail ? `/forgot-password?email=${encodeURIComponent(typedEmail)}` : "/forgot-password"}>Forgot your password?</Link>
+          </p>
+        </div>
         <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
           {isSubmitting ? "Signing in…" : "Sign in"}
         </button>

@@ -10,6 +10,8 @@ const limiters = {
   // The load benchmark raises it through the environment; nothing else should.
   answers: new RateLimiterMemory({ keyPrefix: "answers", points: Number(process.env.ANSWERS_PER_MINUTE) || 30, duration: 60 }),
   newProblem: new RateLimiterMemory({ keyPrefix: "new-problem", points: 60, duration: 60 }),
+  // Spent once per address and once per client: enough for a few tries, too few to flood an inbox.
+  passwordReset: new RateLimiterMemory({ keyPrefix: "password-reset", points: 5, duration: 15 * 60 }),
 };
 
 export type LimitName = keyof typeof limiters;

@@ -27,11 +27,11 @@ export function composeMail(kind: string, to: string, subject: string, body: Mai
     ...(body.footnote ? [body.footnote, ""] : []),
     SIGN_OFF,
   ].join("\n");
-  const html = `<!doctype html><html><body style="margin:0;padding:24px;background:#f7f5ef;font-family:system-ui,sans-serif;color:#1f2328">
+  const html = `<!doctype html><html><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"></head><body style="margin:0;padding:24px;background:#f7f5ef;font-family:system-ui,sans-serif;color:#1f2328">
 <div style="max-width:560px;margin:0 auto;background:#ffffff;border:1px solid #d8d3c4;border-radius:8px;padding:24px">
 <p style="margin:0 0 16px">${escapeHtml(body.greeting)}</p>
 ${body.paragraphs.map((p) => `<p style="margin:0 0 16px;line-height:1.5">${escapeHtml(p)}</p>`).join("\n")}
-${body.action ? `<p style="margin:24px 0"><a href="${escapeHtml(body.action.url)}" style="background:#1d4f91;color:#ffffff;padding:10px 16px;border-radius:6px;text-decoration:none;font-weight:600">${escapeHtml(body.action.label)}</a></p><p style="margin:0 0 16px;font-size:13px;color:#555">Or paste this address into your browser: ${escapeHtml(body.action.url)}</p>` : ""}
+${body.action ? `<p style="margin:24px 0"><a href="${escapeHtml(body.action.url)}" style="background:#1d4f91;color:#ffffff;padding:10px 16px;border-radius:6px;text-decoration:none;font-weight:600">${escapeHtml(body.action.label)}</a></p><p style="margin:0 0 16px;font-size:13px;color:#555;overflow-wrap:anywhere;word-break:break-all">Or paste this address into your browser: ${escapeHtml(body.action.url)}</p>` : ""}
 ${body.footnote ? `<p style="margin:0 0 16px;font-size:13px;color:#555">${escapeHtml(body.footnote)}</p>` : ""}
 <p style="margin:24px 0 0;font-size:13px;color:#555">${escapeHtml(SIGN_OFF)}</p>
 </div></body></html>`;

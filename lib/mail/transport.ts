@@ -1,6 +1,7 @@
-import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { env } from "@/lib/env";
+
+// No "server-only" marker here or in the outbox: `npm run reminders` and the tests load them outside Next.
 
 const LOOPBACK = new Set(["127.0.0.1", "localhost", "::1", "[::1]"]);
 
@@ -21,10 +22,16 @@ export function smtpOptions(url: string) {
   };
 }
 
+/** A transport for one SMTP address; the outbox takes one of these when a caller (a test) passes its own. */
+export function createTransport(url: string): Transporter {
+  return nodemailer.createTransport(smtpOptions(url));
+}
+
 const holder = globalThis as typeof globalThis & { __sixteenthsMail?: { url: string; transport: Transporter } };
 
+/** The process's transport for SMTP_URL. */
 export function transport(): Transporter {
   const url = env().SMTP_URL;
-  if (holder.__sixteenthsMail?.url !== url) holder.__sixteenthsMail = { url, transport: nodemailer.createTransport(smtpOptions(url)) };
+  if (holder.__sixteenthsMail?.url !== url) holder.__sixteenthsMail = { url, transport: createTransport(url) };
   return holder.__sixteenthsMail.transport;
 }
