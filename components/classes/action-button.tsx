@@ -66,7 +66,7 @@ export function ActionButton({ url, method = "POST", label, accessibleLabel, pen
         </span>
       ) : null}
       {confirm ? (
-        <dialog ref={dialog} aria-labelledby={titleId} className="card m-auto w-[min(28rem,calc(100vw-2rem))] p-0 text-ink backdrop:bg-ink/40">
+        <dialog ref={dialog} aria-labelledby={titleId} className="card m-auto w-[min(28rem,calc(100vw-2rem))] p-0 text-left font-normal text-ink backdrop:bg-ink/40">
           <div className="space-y-4 p-5">
             <h2 id={titleId} className="text-lg">
               {confirm.title}

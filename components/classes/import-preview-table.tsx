@@ -1,5 +1,15 @@
 import type { ImportRow } from "@/lib/classes/import";
 
+function Result({ row }: { row: ImportRow }) {
+  return (
+    <>
+      <span className={`inline-block rounded-sm px-2 py-0.5 text-xs font-semibold whitespace-nowrap ${STATUS[row.status].style}`}>{STATUS[row.status].word}</span>
+      {row.message ? <span className="mt-1 block font-normal text-ink-soft">{row.message}</span> : null}
+      {row.note ? <span className="mt-1 block font-normal text-ink-soft">{row.note}</span> : null}
+    </>
+  );
+}
+
 const STATUS = {
   invite: { word: "Will invite", style: "bg-ok-bg text-ok" },
   resend: { word: "Will re-send", style: "bg-chalk-light text-chalk-dark" },
@@ -20,7 +30,7 @@ export function ImportPreviewTable({ rows }: { rows: ImportRow[] }) {
             <th scope="col" className="px-3 py-2">
               Name and e-mail
             </th>
-            <th scope="col" className="px-3 py-2">
+            <th scope="col" className="hidden px-3 py-2 sm:table-cell">
               Result
             </th>
           </tr>
@@ -32,11 +42,13 @@ export function ImportPreviewTable({ rows }: { rows: ImportRow[] }) {
               <td className="px-3 py-2 align-top">
                 <span className="block font-semibold">{row.name || "—"}</span>
                 <span className="block break-all text-ink-soft">{row.email || "—"}</span>
+                {/* On a phone the result sits under the address, so the address keeps the width. */}
+                <span className="mt-1 block sm:hidden">
+                  <Result row={row} />
+                </span>
               </td>
-              <td className="px-3 py-2 align-top">
-                <span className={`inline-block rounded-sm px-2 py-0.5 text-xs font-semibold whitespace-nowrap ${STATUS[row.status].style}`}>{STATUS[row.status].word}</span>
-                {row.message ? <span className="mt-1 block text-ink-soft">{row.message}</span> : null}
-                {row.note ? <span className="mt-1 block text-ink-soft">{row.note}</span> : null}
+              <td className="hidden px-3 py-2 align-top sm:table-cell">
+                <Result row={row} />
               </td>
             </tr>
           ))}

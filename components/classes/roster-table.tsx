@@ -21,7 +21,6 @@ function RowActions({ classId, entry, archived }: { classId: number; entry: Rost
           label="Cancel"
           accessibleLabel={`Cancel the invitation to ${entry.email}`}
           pendingLabel="Cancelling…"
-          tone="danger"
           confirm={{
             title: "Cancel this invitation?",
             body: (
@@ -47,7 +46,6 @@ function RowActions({ classId, entry, archived }: { classId: number; entry: Rost
       label="Remove"
       accessibleLabel={`Remove ${entry.name} from the class`}
       pendingLabel="Removing…"
-      tone="danger"
       confirm={{
         title: `Remove ${entry.name} from the class?`,
         body: (
@@ -94,7 +92,7 @@ export function RosterTable({ classId, className, entries, archived }: { classId
             <th scope="col" className="hidden px-4 py-2 md:table-cell">
               E-mail
             </th>
-            <th scope="col" className="px-4 py-2">
+            <th scope="col" className="hidden px-4 py-2 sm:table-cell">
               Status
             </th>
             <th scope="col" className="px-4 py-2 text-right">
@@ -105,15 +103,19 @@ export function RosterTable({ classId, className, entries, archived }: { classId
         <tbody>
           {entries.map((entry) => (
             <tr key={entry.key} className="border-b border-rule last:border-0">
-              <th scope="row" className="px-4 py-2 align-top font-semibold">
+              <th scope="row" className="px-3 py-2 align-middle font-semibold sm:px-4">
                 {entry.name}
                 <span className="block text-xs font-normal break-all text-ink-soft md:hidden">{entry.email}</span>
+                {/* On a phone the status sits under the name, so the name keeps the width. */}
+                <span className="mt-1 block font-normal sm:hidden">
+                  <StatusCell entry={entry} />
+                </span>
               </th>
-              <td className="hidden px-4 py-2 align-top break-all md:table-cell">{entry.email}</td>
-              <td className="px-4 py-2 align-top">
+              <td className="hidden px-4 py-2 align-middle break-all md:table-cell">{entry.email}</td>
+              <td className="hidden px-4 py-2 align-middle sm:table-cell">
                 <StatusCell entry={entry} />
               </td>
-              <td className="px-4 py-2 text-right align-top">
+              <td className="px-3 py-2 text-right align-middle sm:px-4">
                 <RowActions classId={classId} entry={entry} archived={archived} />
               </td>
             </tr>

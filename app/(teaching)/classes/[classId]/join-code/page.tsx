@@ -33,7 +33,7 @@ export default async function JoinCodePage({ params }: PageProps<"/classes/[clas
         >
           {formatJoinCode(summary.joinCode)}
         </p>
-        <p className="measure text-lg break-all sm:text-3xl">{address}</p>
+        <p className="measure text-base break-words sm:text-3xl">{address}</p>
       </div>
       <p className="max-w-prose text-ink-soft">No account yet? Create one on the sign-up page first; it is free. Spaces and capitals do not matter when you type the code.</p>
     </div>
