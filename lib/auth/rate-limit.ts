@@ -12,6 +12,10 @@ const limiters = {
   newProblem: new RateLimiterMemory({ keyPrefix: "new-problem", points: 60, duration: 60 }),
   // Spent once per address and once per client: enough for a few tries, too few to flood an inbox.
   passwordReset: new RateLimiterMemory({ keyPrefix: "password-reset", points: 5, duration: 15 * 60 }),
+  // Per signed-in student: a mistyped code or two is normal; a script walking the code space is not.
+  joinClass: new RateLimiterMemory({ keyPrefix: "join-class", points: 10, duration: 15 * 60 }),
+  // Per address: a classroom accepting on the school's one IP, not a script trying tokens.
+  acceptInvitation: new RateLimiterMemory({ keyPrefix: "accept-invitation", points: 40, duration: 15 * 60 }),
 };
 
 export type LimitName = keyof typeof limiters;

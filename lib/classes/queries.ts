@@ -2,20 +2,24 @@ import { Op } from "sequelize";
 import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
-import type { EnrollmentStatus } from "@/models/enrollment";
 
 export type ClassSummary = {
   id: number;
   name: string;
   term: string;
   program: string | null;
+  sectionCode: string | null;
   joinCode: string;
+  leadId: number;
   instructorName: string;
   studentCount: number;
+  invitedCount: number;
+  archivedAt: string | null;
   myRole: "lead" | "co-instructor" | "admin" | "student";
 };
 
-export type RosterEntry = { studentId: number; name: string; email: string; status: EnrollmentStatus; joinedAt: string };
+export type Person = { id: number; name: string; email: string };
+export type ClassSettings = { summary: ClassSummary; lead: Person; coInstructors: Person[] };
 
 async function classIdsTaughtBy(userId: number): Promise<number[]> {
   const { SchoolClass, ClassInstructor } = db().models;
@@ -26,39 +30,46 @@ async function classIdsTaughtBy(userId: number): Promise<number[]> {
   return [...new Set([...lead.map((c) => c.id), ...co.map((c) => c.classId)])];
 }
 
-async function summaries(where: object, user: SessionUser): Promise<ClassSummary[]> {
-  const { SchoolClass, User, Enrollment } = db().models;
+async function summaries(where: object, user: SessionUser, archived: boolean | "any" = false): Promise<ClassSummary[]> {
+  const { SchoolClass, User, Enrollment, Invitation } = db().models;
+  const archivedWhere = archived === "any" ? {} : { archivedAt: archived ? { [Op.ne]: null } : null };
   const rows = await SchoolClass.findAll({
-    where: { ...where, archivedAt: null },
+    where: { ...where, ...archivedWhere },
     include: [{ model: User, as: "instructor", attributes: ["name"] }],
     order: [["term", "DESC"], ["name", "ASC"]],
   });
-  // One grouped count for all the classes, not one query per class.
-  const counts = await Enrollment.count({
-    where: { classId: rows.map((r) => r.id), status: "active" },
-    group: ["classId"],
-  });
-  const countOf = new Map(counts.map((c) => [Number(c.classId), c.count]));
+  const ids = rows.map((r) => r.id);
+  // One grouped count per table for all the classes, not one query per class.
+  const [students, invited] = await Promise.all([
+    Enrollment.count({ where: { classId: ids, status: "active" }, group: ["classId"] }),
+    Invitation.count({ where: { classId: ids, acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } }, group: ["classId"] }),
+  ]);
+  const studentsOf = new Map(students.map((c) => [Number(c.classId), c.count]));
+  const invitedOf = new Map(invited.map((c) => [Number(c.classId), c.count]));
   return rows.map((row) => {
     const instructor = (row as unknown as { instructor?: { name: string } }).instructor;
     return {
       id: row.id,
       name: row.name,
       term: row.term,
-      program: row.program ?? null,
+      program: row.program || null,
+      sectionCode: row.sectionCode || null,
       joinCode: row.joinCode,
+      leadId: row.instructorId,
       instructorName: instructor?.name ?? "",
-      studentCount: countOf.get(row.id) ?? 0,
+      studentCount: studentsOf.get(row.id) ?? 0,
+      invitedCount: invitedOf.get(row.id) ?? 0,
+      archivedAt: row.archivedAt ? row.archivedAt.toISOString() : null,
       myRole: user.role === "student" ? "student" : row.instructorId === user.id ? "lead" : user.role === "admin" ? "admin" : "co-instructor",
     };
   });
 }
 
-/** The classes an instructor teaches (lead or co-instructor); an admin sees every class. */
-export async function listTeachingClasses(user: SessionUser): Promise<ClassSummary[]> {
-  if (user.role === "admin") return summaries({}, user);
+/** The classes an instructor teaches (lead or co-instructor); an admin sees every class. Archived ones only when asked. */
+export async function listTeachingClasses(user: SessionUser, { archived = false }: { archived?: boolean } = {}): Promise<ClassSummary[]> {
+  if (user.role === "admin") return summaries({}, user, archived);
   if (user.role !== "instructor") throw new AppError("forbidden", "Only instructors see the classes they teach.");
-  return summaries({ id: { [Op.in]: await classIdsTaughtBy(user.id) } }, user);
+  return summaries({ id: { [Op.in]: await classIdsTaughtBy(user.id) } }, user, archived);
 }
 
 export async function listStudentClasses(user: SessionUser): Promise<ClassSummary[]> {
@@ -75,22 +86,33 @@ export async function canTeach(user: SessionUser, classId: number): Promise<bool
   return (await classIdsTaughtBy(user.id)).includes(classId);
 }
 
-/** A class and its roster, for someone who teaches it; anyone else gets a 403 (or 404 when it does not exist). */
-export async function getClassWithRoster(user: SessionUser, classId: number): Promise<{ summary: ClassSummary; roster: RosterEntry[] }> {
-  const { SchoolClass, Enrollment, User } = db().models;
-  if (!(await SchoolClass.findByPk(classId, { attributes: ["id"] }))) throw new AppError("not_found", "There is no such class.");
-  if (!(await canTeach(user, classId))) throw new AppError("forbidden", "Only the class's instructors can see its roster.");
-  const [summary] = await summaries({ id: classId }, user);
-  if (!summary) throw new AppError("not_found", "That class is archived.");
-  const enrollments = await Enrollment.findAll({
-    where: { classId },
-    include: [{ model: User, as: "student", attributes: ["id", "name", "email"] }],
-  });
-  const roster = enrollments
-    .map((e) => {
-      const student = (e as unknown as { student: { id: number; name: string; email: string } }).student;
-      return { studentId: student.id, name: student.name, email: student.email, status: e.status, joinedAt: e.createdAt.toISOString() };
-    })
+/** A class for someone who teaches it, archived or not; anyone else gets a 403 (or 404 when it does not exist). */
+export async function classForTeacher(user: SessionUser, classId: number): Promise<ClassSummary> {
+  if (!(await db().models.SchoolClass.findByPk(classId, { attributes: ["id"] }))) throw new AppError("not_found", "There is no such class.");
+  if (!(await canTeach(user, classId))) throw new AppError("forbidden", "Only the class's instructors can open this class.");
+  const [summary] = await summaries({ id: classId }, user, "any");
+  return summary;
+}
+
+/** Archiving and choosing co-instructors belong to the lead instructor (and admins), not to every co-instructor. */
+export async function classForLead(user: SessionUser, classId: number): Promise<ClassSummary> {
+  const summary = await classForTeacher(user, classId);
+  if (summary.myRole !== "lead" && summary.myRole !== "admin") {
+    throw new AppError("forbidden", "Only the lead instructor or a program admin can do that for this class.");
+  }
+  return summary;
+}
+
+export async function classSettings(user: SessionUser, classId: number): Promise<ClassSettings> {
+  const summary = await classForTeacher(user, classId);
+  const { User, ClassInstructor } = db().models;
+  const [lead, co] = await Promise.all([
+    User.findByPk(summary.leadId, { attributes: ["id", "name", "email"] }),
+    ClassInstructor.findAll({ where: { classId }, include: [{ model: User, as: "user", attributes: ["id", "name", "email"] }] }),
+  ]);
+  const coInstructors = co
+    .map((c) => (c as unknown as { user: Person }).user)
+    .map((u) => ({ id: u.id, name: u.name, email: u.email }))
     .sort((a, b) => a.name.localeCompare(b.name));
-  return { summary, roster };
+  return { summary, lead: { id: lead!.id, name: lead!.name, email: lead!.email }, coInstructors };
 }

@@ -1,105 +1,130 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { forbidden, notFound } from "next/navigation";
+import { ClassHeader } from "@/components/classes/class-header";
+import { RosterEmpty, RosterTable } from "@/components/classes/roster-table";
 import { requireRole } from "@/lib/auth/session";
-import { getClassWithRoster } from "@/lib/classes/queries";
-import { AppError } from "@/lib/errors";
+import { rosterPage } from "@/lib/classes/roster";
+import { formatJoinCode, ROSTER_FILTERS, rosterQuerySchema, type RosterFilter } from "@/lib/classes/schemas";
+import { classIdOf, orPage } from "./load-class";
 
 export const metadata: Metadata = { title: "Roster" };
 
-const STATUS_STYLE = {
-  active: "bg-ok-bg text-ok",
-  invited: "bg-chalk-light text-chalk-dark",
-  removed: "bg-paper-sunk text-ink-faint",
-} as const;
-
-async function load(classId: string, user: Awaited<ReturnType<typeof requireRole>>) {
-  const id = Number(classId);
-  if (!Number.isInteger(id) || id <= 0) notFound();
-  try {
-    return await getClassWithRoster(user, id);
-  } catch (error) {
-    if (error instanceof AppError && error.code === "forbidden") forbidden();
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  }
-}
+const FILTER_LABEL: Record<RosterFilter, string> = { all: "Everyone", active: "Active", invited: "Invited", removed: "Removed" };
 
 export default async function RosterPage({ params, searchParams }: PageProps<"/classes/[classId]">) {
   const user = await requireRole("instructor", "admin");
-  const [{ classId }, query] = await Promise.all([params, searchParams]);
-  const { summary, roster } = await load(classId, user);
-  const q = typeof query.q === "string" ? query.q.trim().toLowerCase() : "";
-  const shown = q ? roster.filter((r) => r.name.toLowerCase().includes(q) || r.email.includes(q)) : roster;
+  const [{ classId: raw }, search] = await Promise.all([params, searchParams]);
+  const classId = classIdOf(raw);
+  const parsed = rosterQuerySchema.safeParse({ q: search.q, status: search.status, page: search.page });
+  const query = parsed.success ? parsed.data : rosterQuerySchema.parse({});
+  const { summary, roster, counts, page, pageCount, total } = await orPage(() => rosterPage(user, classId, query));
+  const base = `/classes/${classId}`;
+  const href = (changes: Partial<{ q: string; status: RosterFilter; page: number }>) => {
+    const next = { q: query.q, status: query.status, page: 1, ...changes };
+    const qs = new URLSearchParams();
+    if (next.q) qs.set("q", next.q);
+    if (next.status !== "all") qs.set("status", next.status);
+    if (next.page > 1) qs.set("page", String(next.page));
+    const text = qs.toString();
+    return text ? `${base}?${text}` : base;
+  };
+  const everyoneCount = query.q ? null : counts.all;
 
   return (
     <div className="space-y-6">
-      <nav aria-label="Breadcrumb" className="text-sm">
-        <Link href="/classes">Classes</Link> <span aria-hidden="true">/</span> <span>{summary.name}</span>
-      </nav>
-      <header className="flex flex-wrap items-end justify-between gap-4">
-        <div>
-          <h1 className="text-2xl">{summary.name}</h1>
-          <p className="text-ink-soft">
-            {summary.term} · {summary.studentCount} students · led by {summary.instructorName}
-          </p>
-        </div>
-        <div className="card px-4 py-2 text-center">
-          <p className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Join code</p>
-          <p className="measure text-2xl font-bold tracking-[0.2em]">{summary.joinCode}</p>
-        </div>
-      </header>
+      <ClassHeader summary={summary} current="roster" />
+
+      <div className="grid gap-4 md:grid-cols-2">
+        <section aria-labelledby="code-heading" className="card flex flex-wrap items-center justify-between gap-3 p-4">
+          <div>
+            <h2 id="code-heading" className="text-xs font-semibold uppercase tracking-wide text-ink-faint">
+              Join code
+            </h2>
+            <p className="measure text-2xl font-bold tracking-[0.2em]">{formatJoinCode(summary.joinCode)}</p>
+          </div>
+          <Link href={`${base}/join-code`} className="btn-quiet">
+            Show on projector
+          </Link>
+        </section>
+        {/* The assignments pages are their own area of the class; this is the way in. */}
+        <section aria-labelledby="assignments-heading" className="card flex flex-wrap items-center justify-between gap-3 border-l-4 border-l-chalk p-4">
+          <div>
+            <h2 id="assignments-heading" className="text-lg">
+              Assignments
+            </h2>
+            <p className="text-sm text-ink-soft">Build, publish and follow the class&apos;s layout work.</p>
+          </div>
+          <Link href={`${base}/assignments`} className="btn-primary">
+            Assignments
+          </Link>
+        </section>
+      </div>
 
       <section aria-labelledby="roster-heading" className="space-y-3">
         <div className="flex flex-wrap items-end justify-between gap-3">
           <h2 id="roster-heading" className="text-xl">
             Roster
           </h2>
-          <form role="search" className="flex gap-2">
-            <label htmlFor="roster-q" className="sr-only">
-              Search the roster by name or e-mail
-            </label>
-            <input id="roster-q" name="q" defaultValue={q} placeholder="Search name or e-mail" className="input w-56" />
-            <button className="btn-quiet" type="submit">
-              Search
-            </button>
-          </form>
+          <Link href={`${base}/add-students`} className="btn-quiet" data-chrome>
+            Add students
+          </Link>
         </div>
-        {shown.length === 0 ? (
-          <p className="card p-4 text-ink-soft">{q ? `No student matches “${q}”.` : "No students in this class yet."}</p>
+        {everyoneCount === 0 ? (
+          <RosterEmpty classId={classId} />
         ) : (
-          <div className="card overflow-x-auto">
-            <table className="w-full text-left text-sm">
-              <caption className="sr-only">Students in {summary.name}</caption>
-              <thead className="border-b border-rule bg-paper-sunk">
-                <tr>
-                  <th scope="col" className="px-4 py-2">
-                    Name
-                  </th>
-                  <th scope="col" className="hidden px-4 py-2 sm:table-cell">
-                    E-mail
-                  </th>
-                  <th scope="col" className="px-4 py-2">
-                    Status
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
-                {shown.map((r) => (
-                  <tr key={r.studentId} className="border-b border-rule last:border-0">
-                    <th scope="row" className="px-4 py-2 font-semibold">
-                      {r.name}
-                      <span className="block text-xs font-normal break-all text-ink-soft sm:hidden">{r.email}</span>
-                    </th>
-                    <td className="hidden px-4 py-2 break-all sm:table-cell">{r.email}</td>
-                    <td className="px-4 py-2">
-                      <span className={`rounded-sm px-2 py-0.5 text-xs font-semibold ${STATUS_STYLE[r.status]}`}>{r.status}</span>
-                    </td>
-                  </tr>
+          <>
+            <div className="flex flex-wrap items-end justify-between gap-3" data-chrome>
+              <nav aria-label="Filter the roster by status" className="flex flex-wrap gap-1">
+                {ROSTER_FILTERS.map((status) => (
+                  <Link
+                    key={status}
+                    href={href({ status })}
+                    aria-current={status === query.status ? "page" : undefined}
+                    className={`rounded-full border px-3 py-1 text-sm font-semibold no-underline ${status === query.status ? "border-chalk-dark bg-chalk text-white" : "border-rule-strong text-ink hover:bg-paper-sunk"}`}
+                  >
+                    {FILTER_LABEL[status]} <span className="measure">{counts[status]}</span>
+                  </Link>
                 ))}
-              </tbody>
-            </table>
-          </div>
+              </nav>
+              <form role="search" className="flex w-full gap-2 sm:w-auto" action={base}>
+                {query.status !== "all" ? <input type="hidden" name="status" value={query.status} /> : null}
+                <label htmlFor="roster-q" className="sr-only">
+                  Search the roster by name or e-mail
+                </label>
+                <input id="roster-q" name="q" defaultValue={query.q} placeholder="Search name or e-mail" className="input min-w-0 flex-1 sm:w-56" />
+                <button className="btn-quiet" type="submit">
+                  Search
+                </button>
+              </form>
+            </div>
+            {roster.length === 0 ? (
+              <p className="card p-4 text-ink-soft">
+                {query.q ? `No student matches “${query.q}”.` : `Nobody is ${query.status} in this class.`}{" "}
+                {query.q || query.status !== "all" ? <Link href={base}>Show everyone</Link> : null}
+              </p>
+            ) : (
+              <RosterTable classId={classId} className={summary.name} entries={roster} archived={Boolean(summary.archivedAt)} />
+            )}
+            {pageCount > 1 ? (
+              <nav aria-label="Roster pages" className="flex flex-wrap items-center justify-between gap-3 text-sm" data-chrome>
+                <span className="text-ink-soft">
+                  Page {page} of {pageCount} · {total} people
+                </span>
+                <span className="flex gap-2">
+                  {page > 1 ? (
+                    <Link className="btn-quiet" href={href({ page: page - 1 })} rel="prev">
+                      Previous page
+                    </Link>
+                  ) : null}
+                  {page < pageCount ? (
+                    <Link className="btn-quiet" href={href({ page: page + 1 })} rel="next">
+                      Next page
+                    </Link>
+                  ) : null}
+                </span>
+              </nav>
+            ) : null}
+          </>
         )}
       </section>
     </div>

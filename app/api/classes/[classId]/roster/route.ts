@@ -1,12 +1,12 @@
 import { NextResponse } from "next/server";
-import { z } from "zod";
 import { withAuth } from "@/lib/auth/route";
 import { TEACHING_ROLES } from "@/lib/auth/roles";
-import { getClassWithRoster } from "@/lib/classes/queries";
+import { rosterPage } from "@/lib/classes/roster";
+import { classParamsSchema, rosterQuerySchema } from "@/lib/classes/schemas";
 
-const paramsSchema = z.object({ classId: z.coerce.number({ error: "The class id must be a number." }).int().positive() });
-
-export const GET = withAuth<{ classId: string }>([...TEACHING_ROLES], async (_req, { user, params }) => {
-  const { classId } = paramsSchema.parse(params);
-  return NextResponse.json(await getClassWithRoster(user, classId));
+/** Students and open invitations: ?q= searches name and e-mail, ?status= filters, ?page= pages by 25. */
+export const GET = withAuth<{ classId: string }>([...TEACHING_ROLES], async (req, { user, params }) => {
+  const { classId } = classParamsSchema.parse(params);
+  const query = rosterQuerySchema.parse(Object.fromEntries(new URL(req.url).searchParams));
+  return NextResponse.json(await rosterPage(user, classId, query));
 });
