@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { DEMO_STAFF, DEMO_STUDENTS } from "@/seeders/demo";
+import { DEMO_INVITED, DEMO_STAFF, DEMO_STUDENTS } from "@/seeders/demo";
 import { expectSignedInAs, signIn } from "./helpers";
 
 const dana = DEMO_STAFF.find((s) => s.name === "Dana Whitlock")!;
@@ -30,7 +30,7 @@ test("an instructor signs in, opens the class and searches the roster", async ({
   await main(page).getByRole("link", { name: "Classes" }).click();
   await page.getByRole("link", { name: "CARP 110 — Finish Carpentry I" }).click();
   await expect(page.getByRole("table")).toContainText(student.name);
-  await expect(page.getByRole("row")).toHaveCount(DEMO_STUDENTS.length + 1);
+  await expect(page.getByRole("row")).toHaveCount(DEMO_STUDENTS.length + DEMO_INVITED.length + 1);
   await page.getByLabel("Search the roster by name or e-mail").fill("okafor");
   await page.getByRole("button", { name: "Search" }).click();
   await expect(page.getByText("No student matches “okafor”.")).toBeVisible();

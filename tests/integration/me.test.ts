@@ -1,7 +1,7 @@
 import bcrypt from "bcryptjs";
 import { describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/lib/db";
-import { DEMO_PASSWORD, DEMO_STAFF, DEMO_STUDENTS } from "@/seeders/demo";
+import { DEMO_PASSWORD, DEMO_STAFF, DEMO_INVITED, DEMO_STUDENTS } from "@/seeders/demo";
 import { signInCookie } from "../support/http";
 
 const baseURL = inject("baseURL");
@@ -60,13 +60,15 @@ describe("role checks on the server", () => {
     expect(res.headers.get("location")).toContain("/signin?callbackUrl=%2Fclasses%2F1");
   });
 
-  it("an instructor sees their own class and its roster of 18", async () => {
+  it("an instructor sees their own class and its roster of 18 students and 3 open invitations", async () => {
     const cookie = (await signInCookie(baseURL, dana.email, DEMO_PASSWORD))!;
     const list = await (await fetch(`${baseURL}/api/classes`, { headers: { cookie } })).json();
     expect(list.classes).toHaveLength(1);
     const roster = await fetch(`${baseURL}/api/classes/${list.classes[0].id}/roster`, { headers: { cookie } });
     expect(roster.status).toBe(200);
-    expect((await roster.json()).roster).toHaveLength(DEMO_STUDENTS.length);
+    const body = await roster.json();
+    expect(body.roster).toHaveLength(DEMO_STUDENTS.length + DEMO_INVITED.length);
+    expect(body.roster.filter((r: { status: string }) => r.status === "invited")).toHaveLength(DEMO_INVITED.length);
   });
 
   it("the co-instructor may read the roster; another instructor and a student of the class may not", async () => {
