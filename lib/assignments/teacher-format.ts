@@ -2,8 +2,8 @@
 import type { ProblemPart } from "@/lib/problems/types";
 
 export const TOLERANCE_LABELS = {
-  half: "Standard — within half a graduation",
-  full: "Lenient — within a full graduation",
+  half: "Standard: ± half a graduation",
+  full: "Lenient: ± a full graduation",
 } as const;
 
 export const REVEAL_LABELS = {
@@ -38,3 +38,12 @@ export function copyTitle(title: string): string {
   const suffix = " (copy)";
   return title.length + suffix.length <= 160 ? `${title}${suffix}` : `${title.slice(0, 160 - suffix.length).trimEnd()}${suffix}`;
 }
+
+/** A problem kind as the builder offers it (the server hands the list over; no generator reaches the browser). */
+export type KindOption = {
+  key: string;
+  title: string;
+  summary: string;
+  skillTitle: string;
+  levels: { level: 1 | 2 | 3; label: string; description: string }[];
+};

@@ -3,10 +3,11 @@ import { fn, col, literal } from "sequelize";
 import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
-import { canTeach } from "@/lib/classes/queries";
-import { findKind } from "@/lib/problems";
+import { canTeach, listTeachingClasses } from "@/lib/classes/queries";
+import { findKind, PROBLEM_KINDS } from "@/lib/problems";
 import { SKILL_TITLES } from "@/lib/practice/skills";
 import { assignmentForTeacher, itemsOf, type AssignmentItemRecord, type AssignmentRecord } from "./access";
+import type { KindOption } from "./teacher-format";
 
 // What the instructor's pages and the API hand out: plain objects, dates as ISO strings.
 
@@ -154,4 +155,15 @@ export async function getTeacherAssignment(user: SessionUser, assignmentId: numb
   const assignment = await assignmentForTeacher(user, assignmentId);
   const [items, klass] = await Promise.all([itemsOf(assignmentId), classForTeacher(user, assignment.classId)]);
   return toTeacherAssignment(assignment, items, klass);
+}
+
+/** Every problem kind in course order, for the builder's select. */
+export function kindCatalog(): KindOption[] {
+  return PROBLEM_KINDS.map((k) => ({ key: k.key, title: k.title, summary: k.summary, skillTitle: SKILL_TITLES[k.skill], levels: k.levels.map((l) => ({ level: l.level, label: l.label, description: l.description })) }));
+}
+
+/** Other classes this user teaches, for "duplicate into…". */
+export async function duplicateTargets(user: SessionUser): Promise<{ id: number; name: string; term: string }[]> {
+  const classes = await listTeachingClasses(user);
+  return classes.map((c) => ({ id: c.id, name: c.name, term: c.term }));
 }
