@@ -85,8 +85,8 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
             <thead className="border-b border-rule bg-paper-sunk">
               <tr>
                 <th scope="col" className="px-3 py-2">Student</th>
-                <th scope="col" className="px-3 py-2">Due</th>
-                <th scope="col" className="px-3 py-2">Extra tries</th>
+                <th scope="col" className="hidden px-3 py-2 sm:table-cell">Due</th>
+                <th scope="col" className="hidden px-3 py-2 sm:table-cell">Extra tries</th>
                 <th scope="col" className="hidden px-3 py-2 md:table-cell">Note</th>
                 <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th>
               </tr>
@@ -96,10 +96,20 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
                 <tr key={e.studentId} className="border-b border-rule align-top last:border-0">
                   <th scope="row" className="px-3 py-2 font-semibold">
                     {e.studentName}
+                    <span className="block text-xs font-normal text-ink-soft sm:hidden">
+                      {e.dueAt ? (
+                        <>
+                          Due <LocalTime iso={e.dueAt} />
+                        </>
+                      ) : (
+                        "Class due date"
+                      )}
+                      {e.extraAttempts > 0 ? ` · +${pluralize(e.extraAttempts, "try", "tries")}` : ""}
+                    </span>
                     {e.note ? <span className="block text-xs font-normal text-ink-soft md:hidden">{e.note}</span> : null}
                   </th>
-                  <td className="px-3 py-2">{e.dueAt ? <LocalTime iso={e.dueAt} /> : <span className="text-ink-soft">as the class (<LocalTime iso={dueAt} style="date" />)</span>}</td>
-                  <td className="measure px-3 py-2">{e.extraAttempts > 0 ? `+${e.extraAttempts}` : "—"}</td>
+                  <td className="hidden px-3 py-2 sm:table-cell">{e.dueAt ? <LocalTime iso={e.dueAt} /> : <span className="text-ink-soft">as the class (<LocalTime iso={dueAt} style="date" />)</span>}</td>
+                  <td className="measure hidden px-3 py-2 sm:table-cell">{e.extraAttempts > 0 ? `+${e.extraAttempts}` : "—"}</td>
                   <td className="hidden px-3 py-2 md:table-cell">{e.note ?? <span className="text-ink-faint">—</span>}</td>
                   <td className="px-3 py-2">
                     <div className="flex flex-wrap justify-end gap-2">

@@ -80,29 +80,20 @@ function SamplePreviewDialog({ state, onAnother, onClose }: { state: PreviewStat
               <div className="space-y-3" dangerouslySetInnerHTML={{ __html: preview.promptHtml }} />
               {preview.figure ? <ProblemFigureView figure={preview.figure} /> : null}
             </div>
-            <div className="overflow-x-auto">
-              <table className="w-full text-left text-sm">
-                <caption className="sr-only">Answer boxes, how close an answer must be, and the expected answers</caption>
-                <thead className="border-b border-rule">
-                  <tr>
-                    <th scope="col" className="py-2 pr-3">Answer box</th>
-                    <th scope="col" className="py-2 pr-3">Asked</th>
-                    <th scope="col" className="py-2 pr-3">Accepted</th>
-                    <th scope="col" className="py-2">Expected</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {preview.parts.map((p) => (
-                    <tr key={p.key} className="border-b border-rule align-top last:border-0">
-                      <th scope="row" className="py-2 pr-3 font-semibold">{p.label}</th>
-                      <td className="py-2 pr-3 text-ink-soft">{p.hint}</td>
-                      <td className="measure py-2 pr-3">{p.accepts}</td>
-                      <td className="measure py-2 font-semibold" data-expected={p.key}>{p.expected}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <h3 className="text-base">Expected answers</h3>
+            <ul className="grid gap-2 sm:grid-cols-2">
+              {preview.parts.map((p) => (
+                <li key={p.key} className="rounded border border-rule bg-paper p-3">
+                  <p className="text-sm text-ink-soft">{p.label}</p>
+                  <p className="measure text-lg font-semibold" data-expected={p.key}>
+                    {p.expected}
+                  </p>
+                  <p className="text-xs text-ink-soft">
+                    Asked {p.hint}; accepted {p.accepts}.
+                  </p>
+                </li>
+              ))}
+            </ul>
             <details className="rounded border border-rule bg-paper p-3">
               <summary className="cursor-pointer font-semibold">Worked solution ({preview.stepsHtml.length} steps)</summary>
               <ol className="mt-3 list-decimal space-y-2 pl-6">

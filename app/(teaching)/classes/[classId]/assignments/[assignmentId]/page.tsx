@@ -106,9 +106,9 @@ export default async function AssignmentOverviewPage({ params, searchParams }: P
             <caption className="sr-only">Items of this assignment</caption>
             <thead className="border-b border-rule bg-paper-sunk">
               <tr>
-                <th scope="col" className="px-3 py-2">#</th>
+                <th scope="col" className="hidden px-3 py-2 sm:table-cell">#</th>
                 <th scope="col" className="px-3 py-2">Kind</th>
-                <th scope="col" className="px-3 py-2">Level</th>
+                <th scope="col" className="hidden px-3 py-2 sm:table-cell">Level</th>
                 <th scope="col" className="hidden px-3 py-2 sm:table-cell">Tolerance</th>
                 <th scope="col" className="px-3 py-2 text-right">Points</th>
               </tr>
@@ -116,24 +116,33 @@ export default async function AssignmentOverviewPage({ params, searchParams }: P
             <tbody>
               {a.items.map((item) => (
                 <tr key={item.id} className="border-b border-rule align-top last:border-0">
-                  <td className="measure px-3 py-2">{item.position}</td>
+                  <td className="measure hidden px-3 py-2 sm:table-cell">{item.position}</td>
                   <th scope="row" className="px-3 py-2 font-semibold">
                     {item.kindTitle}
                     <span className="block text-xs font-normal text-ink-soft">{item.skillTitle}</span>
+                    <span className="block text-xs font-normal text-ink-soft sm:hidden">
+                      Level {item.level} — {item.levelLabel} · {item.problemCount} × {item.points} points
+                    </span>
                   </th>
-                  <td className="px-3 py-2">
+                  <td className="hidden px-3 py-2 sm:table-cell">
                     {item.level} — {item.levelLabel}
                   </td>
                   <td className="hidden px-3 py-2 sm:table-cell">{TOLERANCE_LABELS[item.tolerance]}</td>
                   <td className="measure px-3 py-2 text-right whitespace-nowrap">
-                    {item.problemCount} × {item.points} = <strong>{item.problemCount * item.points}</strong>
+                    <span className="hidden sm:inline">
+                      {item.problemCount} × {item.points} ={" "}
+                    </span>
+                    <strong>{item.problemCount * item.points}</strong>
                   </td>
                 </tr>
               ))}
             </tbody>
             <tfoot>
               <tr className="border-t border-rule-strong">
-                <th scope="row" colSpan={4} className="px-3 py-2 text-right">
+                <th scope="row" colSpan={4} className="hidden px-3 py-2 text-right sm:table-cell">
+                  Total
+                </th>
+                <th scope="row" className="px-3 py-2 text-right sm:hidden">
                   Total
                 </th>
                 <td className="measure px-3 py-2 text-right font-bold">{a.totalPoints}</td>
