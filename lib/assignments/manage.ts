@@ -129,8 +129,12 @@ export async function publishAssignment(user: SessionUser, assignmentId: number,
         dedupeKey: `published:${assignmentId}:${student.id}`,
       };
     });
-    await enqueueMail(messages, transaction);
-    return messages.length;
+    // A student e-mailed at an earlier publish is not e-mailed again, nor counted as e-mailed now.
+    const already = await models.EmailOutbox.findAll({ attributes: ["dedupeKey"], where: { dedupeKey: messages.map((m) => m.dedupeKey) }, transaction });
+    const sentBefore = new Set(already.map((row) => row.dedupeKey));
+    const fresh = messages.filter((m) => !sentBefore.has(m.dedupeKey));
+    await enqueueMail(fresh, transaction);
+    return fresh.length;
   });
   return { assignment: await getTeacherAssignment(user, assignmentId), emailed };
 }
