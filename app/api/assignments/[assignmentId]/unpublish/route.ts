@@ -1,0 +1,10 @@
+import { NextResponse } from "next/server";
+import { withAuth } from "@/lib/auth/route";
+import { TEACHING_ROLES } from "@/lib/auth/roles";
+import { unpublishAssignment } from "@/lib/assignments/manage";
+import { assignmentParamsSchema } from "@/lib/assignments/teacher-schemas";
+
+export const POST = withAuth<{ assignmentId: string }>([...TEACHING_ROLES], async (_req, { user, params }) => {
+  const { assignmentId } = assignmentParamsSchema.parse(params);
+  return NextResponse.json({ assignment: await unpublishAssignment(user, assignmentId) });
+});

@@ -1,0 +1,55 @@
+"use client";
+
+import { useEffect, useId, useRef, type ReactNode } from "react";
+
+type Props = {
+  open: boolean;
+  title: string;
+  children: ReactNode;
+  confirmLabel: string;
+  tone?: "primary" | "danger";
+  busy?: boolean;
+  onConfirm: () => void;
+  onCancel: () => void;
+};
+
+/**
+ * A modal question before anything that sends mail or cannot be undone. The native <dialog>
+ * traps focus, closes on Escape and returns focus to the button that opened it.
+ */
+export function ConfirmDialog({ open, title, children, confirmLabel, tone = "primary", busy = false, onConfirm, onCancel }: Props) {
+  const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+  useEffect(() => {
+    const dialog = ref.current;
+    if (!dialog) return;
+    if (open && !dialog.open) dialog.showModal();
+    if (!open && dialog.open) dialog.close();
+  }, [open]);
+  return (
+    <dialog
+      ref={ref}
+      aria-labelledby={titleId}
+      onCancel={(e) => {
+        e.preventDefault();
+        if (!busy) onCancel();
+      }}
+      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-lg border border-rule bg-paper-raised p-0 text-ink shadow-xl backdrop:bg-ink/40"
+    >
+      <div className="space-y-4 p-5">
+        <h2 id={titleId} className="text-lg">
+          {title}
+        </h2>
+        <div className="space-y-2 text-ink-soft">{children}</div>
+        <div className="flex flex-wrap justify-end gap-3">
+          <button type="button" className="btn-quiet" onClick={onCancel} disabled={busy}>
+            Cancel
+          </button>
+          <button type="button" className={tone === "danger" ? "btn border-danger bg-danger text-white hover:opacity-90" : "btn-primary"} onClick={onConfirm} disabled={busy}>
+            {busy ? "Working…" : confirmLabel}
+          </button>
+        </div>
+      </div>
+    </dialog>
+  );
+}
