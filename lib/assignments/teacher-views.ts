@@ -3,7 +3,7 @@ import { fn, col, literal } from "sequelize";
 import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
-import { canTeach, listTeachingClasses } from "@/lib/classes/queries";
+import { classForTeacher as teachingClass, listTeachingClasses } from "@/lib/classes/queries";
 import { findKind, PROBLEM_KINDS } from "@/lib/problems";
 import { SKILL_TITLES } from "@/lib/practice/skills";
 import { assignmentForTeacher, itemsOf, type AssignmentItemRecord, type AssignmentRecord } from "./access";
@@ -57,13 +57,11 @@ export type TeachingClass = { id: number; name: string; term: string; activeStud
 export const ASSIGNMENTS_PER_PAGE = 20;
 
 /** A class for someone who teaches it: 404 when it does not exist (or is archived), 403 when not theirs. */
+/** The class an instructor builds assignments in: the classes module's check, then archived classes are closed. */
 export async function classForTeacher(user: SessionUser, classId: number): Promise<TeachingClass> {
-  const { SchoolClass, Enrollment } = db().models;
-  const row = Number.isSafeInteger(classId) ? await SchoolClass.findByPk(classId, { attributes: ["id", "name", "term", "archivedAt"] }) : null;
-  if (!row || row.archivedAt) throw new AppError("not_found", "There is no such class.");
-  if (!(await canTeach(user, classId))) throw new AppError("forbidden", "Only the class's instructors can manage its assignments.");
-  const activeStudents = await Enrollment.count({ where: { classId, status: "active" } });
-  return { id: row.id, name: row.name, term: row.term, activeStudents };
+  const summary = Number.isSafeInteger(classId) ? await teachingClass(user, classId) : null;
+  if (!summary || summary.archivedAt) throw new AppError("not_found", "There is no such class.");
+  return { id: summary.id, name: summary.name, term: summary.term, activeStudents: summary.studentCount };
 }
 
 export function itemView(item: AssignmentItemRecord): TeacherItem {

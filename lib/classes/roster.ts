@@ -107,3 +107,18 @@ export async function readdStudent(user: SessionUser, classId: number, studentId
   if (enrollment.status === "active") throw new AppError("conflict", "That student is already active.");
   await enrollment.update({ status: "active" });
 }
+
+export type ClassStudent = { studentId: number; name: string; email: string; status: "active" | "invited" };
+
+/** Everyone with an account on the class (not removed), by name: for pickers such as extensions. */
+export async function classStudents(user: SessionUser, classId: number): Promise<ClassStudent[]> {
+  await classForTeacher(user, classId);
+  const rows = await db().sequelize.query<{ studentId: number; name: string; email: string; status: "active" | "invited" }>(
+    `SELECT u.id AS studentId, u.name AS name, u.email AS email, e.status AS status
+       FROM enrollments e JOIN users u ON u.id = e.student_id
+      WHERE e.class_id = :classId AND e.status <> 'removed'
+      ORDER BY u.name COLLATE NOCASE`,
+    { replacements: { classId }, type: QueryTypes.SELECT },
+  );
+  return rows;
+}

@@ -11,7 +11,7 @@ import { requireRole } from "@/lib/auth/session";
 import { listExtensions } from "@/lib/assignments/extensions";
 import { REVEAL_LABELS, TOLERANCE_LABELS, latePolicyText, pluralize } from "@/lib/assignments/teacher-format";
 import { duplicateTargets, getTeacherAssignment } from "@/lib/assignments/teacher-views";
-import { getClassWithRoster } from "@/lib/classes/queries";
+import { classStudents } from "@/lib/classes/roster";
 import { idFrom, orPage } from "../guard";
 
 export const metadata: Metadata = { title: "Assignment" };
@@ -21,8 +21,7 @@ export default async function AssignmentOverviewPage({ params, searchParams }: P
   const [{ classId, assignmentId }, query] = await Promise.all([params, searchParams]);
   const a = await orPage(getTeacherAssignment(user, idFrom(assignmentId)));
   if (a.classId !== idFrom(classId)) notFound();
-  const [extensions, { roster }, targets] = await Promise.all([listExtensions(user, a.id), orPage(getClassWithRoster(user, a.classId)), duplicateTargets(user)]);
-  const students = roster.filter((r) => r.status !== "removed").map((r) => ({ studentId: r.studentId, name: r.name, email: r.email, status: r.status as "active" | "invited" }));
+  const [extensions, students, targets] = await Promise.all([listExtensions(user, a.id), orPage(classStudents(user, a.classId)), duplicateTargets(user)]);
   const published = typeof query.published === "string" ? Number(query.published) : null;
 
   return (
