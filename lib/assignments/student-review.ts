@@ -18,6 +18,11 @@ export type StudentReview = {
   problems: AssignmentProblemView[];
 };
 
+/** For breadcrumbs on the instructor's pages. */
+export async function classNameOf(classId: number): Promise<string> {
+  return (await db().models.SchoolClass.findByPk(classId, { attributes: ["name"] }))?.name ?? "Class";
+}
+
 /**
  * For someone who teaches the class (checked by the caller). A student who was removed from the
  * class still has their work shown; someone never in the class is a 404.
