@@ -33,14 +33,19 @@ export function SubmissionProblem({ problem }: { problem: AssignmentProblemView 
         </div>
       </details>
       {problem.final ? (
-        <dl className="grid gap-2 text-sm sm:grid-cols-2">
-          {problem.parts.map((p) => (
-            <div key={p.key} className="rounded border border-rule bg-paper p-2">
-              <dt className="text-ink-soft">{p.label}</dt>
-              <dd className="measure font-semibold">answer {problem.final!.expected[p.key]}</dd>
-            </div>
-          ))}
-        </dl>
+        <div className="space-y-1">
+          <h4 className="text-sm font-semibold">Answers</h4>
+          <dl className="grid gap-2 text-sm sm:grid-cols-2">
+            {problem.parts.map((p) => (
+              <div key={p.key} className="rounded border border-rule bg-paper p-2">
+                <dt className="text-ink-soft">{p.label}</dt>
+                <dd className="measure font-semibold" data-expected={p.key}>
+                  {problem.final!.expected[p.key]}
+                </dd>
+              </div>
+            ))}
+          </dl>
+        </div>
       ) : null}
       {problem.tries.length > 0 ? <PreviousTries tries={problem.tries} showSlips /> : <p className="text-sm text-ink-faint">No tries yet.</p>}
     </article>

@@ -30,7 +30,7 @@ export function SubmissionsTable({ rows, sort, sortHref, studentHref, caption }:
         <thead className="border-b border-rule bg-paper-sunk">
           <tr>
             <SortHeader label="Student" column="name" sort={sort} href={sortHref} />
-            <th scope="col" className="px-3 py-2">
+            <th scope="col" className="hidden px-3 py-2 sm:table-cell">
               Status
             </th>
             <SortHeader label="Score" column="score" sort={sort} href={sortHref} />
@@ -50,16 +50,19 @@ export function SubmissionsTable({ rows, sort, sortHref, studentHref, caption }:
             <tr key={r.studentId} className="border-b border-rule align-top last:border-0" data-student={r.studentId}>
               <th scope="row" className="px-3 py-2 font-semibold">
                 <Link href={studentHref(r.studentId)}>{r.name}</Link>
-                <span className="block text-xs font-normal break-all text-ink-soft">{r.email}</span>
+                <span className="hidden text-xs font-normal break-all text-ink-soft sm:block">{r.email}</span>
+                <span className="mt-1 block sm:hidden">
+                  <StudentStatusBadge status={r.status} />
+                </span>
               </th>
-              <td className="px-3 py-2">
+              <td className="hidden px-3 py-2 sm:table-cell">
                 <StudentStatusBadge status={r.status} />
               </td>
-              <td className="px-3 py-2 whitespace-nowrap">
-                <span className="measure font-semibold" data-score>
+              <td className="px-3 py-2">
+                <span className="measure font-semibold whitespace-nowrap" data-score>
                   {r.earned} / {r.possible}
                 </span>{" "}
-                <span className="text-ink-soft">({r.percent}%)</span> {r.late ? <LateFlag /> : null}
+                <span className="whitespace-nowrap text-ink-soft">({r.percent}%)</span> {r.late ? <LateFlag /> : null}
                 <span className="block text-xs text-ink-soft md:hidden">
                   {r.finished} of {r.total} finished
                 </span>
