@@ -3,6 +3,7 @@ import * as savedLayouts from "./20261201-0002-saved-layouts";
 import * as lessonProgress from "./20261202-0003-lesson-progress";
 import * as practice from "./20261202-0004-practice";
 import * as classesAssignmentsMail from "./20261203-0005-classes-assignments-mail";
+import * as problemPartCount from "./20261203-0009-problem-part-count";
 
 // Listed by hand, in order, so the same list runs under tsx, vitest and Next without a file glob.
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   { name: "20261202-0003-lesson-progress", ...lessonProgress },
   { name: "20261202-0004-practice", ...practice },
   { name: "20261203-0005-classes-assignments-mail", ...classesAssignmentsMail },
+  { name: "20261203-0009-problem-part-count", ...problemPartCount },
 ];

@@ -2,43 +2,55 @@
 
 import Link from "next/link";
 import { useEffect, useRef, useState } from "react";
+import type { AssignmentProblemExtras } from "@/lib/assignments/work";
 import type { ErrorBody } from "@/lib/errors";
 import type { ProblemUpdate, ProblemView } from "@/lib/practice/view";
 import { Alert } from "@/components/ui/alert";
+import { LocalTime } from "@/components/ui/local-time";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { AnswerField } from "./answer-field";
+import { PreviousTries } from "./previous-tries";
 import { ProblemFigureView } from "./problem-figure";
 
-type Props = {
-  initial: ProblemView;
-  /** Called for "Another problem"; the standalone page navigates, a lesson swaps in place. */
-  onAnother: (problem: ProblemView) => void;
-  signedIn: boolean;
-  headingLevel?: "h1" | "h2";
-};
+type Shown = ProblemView & Partial<AssignmentProblemExtras>;
 
-async function postJson<T>(url: string, body: unknown): Promise<{ ok: true; problem: T } | { ok: false; error: ErrorBody["error"] }> {
+/** An assignment's problem: answers go to its own route, and the page hears of each try. */
+export type AssignmentMode = { answerUrl: string; onAnswered: (reply: { late: boolean }) => void };
+
+type Props = {
+  initial: Shown;
+  signedIn: boolean;
+  headingLevel?: "h1" | "h2" | "h3";
+} & ({ assignment?: undefined; /** Called for "Another problem"; the standalone page navigates, a lesson swaps in place. */ onAnother: (problem: ProblemView) => void } | { assignment: AssignmentMode; onAnother?: undefined });
+
+async function postJson<T>(url: string, body: unknown): Promise<{ ok: true; problem: T; late?: boolean } | { ok: false; error: ErrorBody["error"] }> {
   try {
     const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
     const json = await res.json();
-    return res.ok ? { ok: true, problem: json.problem } : { ok: false, error: json.error };
+    return res.ok ? { ok: true, problem: json.problem, late: json.late } : { ok: false, error: json.error };
   } catch {
     return { ok: false, error: { code: "unavailable", message: "Could not reach Sixteenths. Check your connection; your answers are still in the boxes." } };
   }
 }
 
-/** One practice problem: the prompt, an answer box per part, feedback per part, and the worked solution once final. */
-export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = "h1" }: Props) {
+/**
+ * One problem: the prompt, an answer box per part, feedback per part, and the worked solution once
+ * final. Practice and assignments share it; an assignment adds its tries, points and dates.
+ */
+export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, headingLevel = "h1" }: Props) {
   const hydrated = useHydrated();
   const [problem, setProblem] = useState(initial);
   const [answers, setAnswers] = useState<Record<string, string>>(() => Object.fromEntries(initial.parts.map((p) => [p.key, initial.results[p.key]?.raw ?? ""])));
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string>();
   const [busy, setBusy] = useState(false);
+  const [lateNote, setLateNote] = useState(false);
   const started = useRef(0);
   const solutionRef = useRef<HTMLHeadingElement>(null);
-  const final = problem.status !== "open";
+  // An assignment problem also stops taking answers when the student's window closes.
+  const final = assignment ? problem.accepting === false : problem.status !== "open";
   const Heading = headingLevel;
+  const SubHeading = headingLevel === "h1" ? "h2" : headingLevel === "h2" ? "h3" : "h4";
 
   useEffect(() => {
     started.current = Date.now();
@@ -50,7 +62,7 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
     setBusy(true);
     setFormError(undefined);
     const open = problem.parts.filter((p) => problem.results[p.key]?.verdict !== "correct");
-    const result = await postJson<ProblemUpdate>(`/api/practice/${problem.id}/answers`, {
+    const result = await postJson<ProblemUpdate & Partial<AssignmentProblemExtras>>(assignment?.answerUrl ?? `/api/practice/${problem.id}/answers`, {
       answers: Object.fromEntries(open.map((p) => [p.key, answers[p.key] ?? ""])),
       timeMs: Math.min(Date.now() - started.current, 86_400_000),
     });
@@ -62,7 +74,9 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
     }
     setFieldErrors({});
     setProblem((current) => ({ ...current, ...result.problem }));
-    if (result.problem.status !== "open") requestAnimationFrame(() => solutionRef.current?.focus());
+    setLateNote(result.late === true);
+    assignment?.onAnswered({ late: result.late === true });
+    if (result.problem.final) requestAnimationFrame(() => solutionRef.current?.focus());
   };
 
   const another = async () => {
@@ -73,7 +87,7 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
     setProblem(result.problem);
     setAnswers(Object.fromEntries(result.problem.parts.map((p) => [p.key, ""])));
     setFieldErrors({});
-    onAnother(result.problem);
+    onAnother?.(result.problem);
   };
 
   const triesLeft = problem.attemptsAllowed - problem.attemptsUsed;
@@ -81,11 +95,17 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
     <article className="space-y-5" data-problem={problem.kind} data-status={problem.status} aria-labelledby={`problem-${problem.id}`}>
       <header className="space-y-1">
         <p className="text-sm text-ink-faint">
+          {problem.number ? `Problem ${problem.number} · ` : ""}
           {problem.skillTitle} · Level {problem.level}: {problem.levelLabel}
         </p>
         <Heading id={`problem-${problem.id}`} className={headingLevel === "h1" ? "text-2xl" : "text-xl"}>
           {problem.title}
         </Heading>
+        {problem.points !== undefined ? (
+          <p className="text-sm text-ink-soft" data-points>
+            <span className="measure font-semibold text-ink">{problem.earned}</span> of {problem.points} {problem.points === 1 ? "point" : "points"}
+          </p>
+        ) : null}
       </header>
       <div className="card space-y-3 p-4">
         <div className="space-y-3 leading-relaxed" dangerouslySetInnerHTML={{ __html: problem.promptHtml }} />
@@ -107,6 +127,7 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
             />
           ))}
           {formError ? <Alert tone="error">{formError}</Alert> : null}
+          {lateNote ? <Alert tone="info">This try came in after the due date and counts as late.</Alert> : null}
           {final ? null : (
             <div className="flex flex-wrap items-center gap-3">
               <button type="submit" className="btn-primary">
@@ -120,11 +141,28 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
         </fieldset>
       </form>
 
+      {assignment && final && problem.status === "open" ? <p className="text-sm font-semibold text-ink-soft">Answers are closed for this problem.</p> : null}
+      {problem.tries && problem.tries.length > 0 ? (
+        <details className="space-y-2" open={final}>
+          <summary className="cursor-pointer text-sm font-semibold">
+            Your tries ({problem.tries.length} of {problem.attemptsAllowed})
+          </summary>
+          <div className="pt-2">
+            <PreviousTries tries={problem.tries} />
+          </div>
+        </details>
+      ) : null}
+      {!problem.final && problem.solutionAfter ? (
+        <p className="card p-3 text-sm" data-solution-waits>
+          {problem.status === "solved" ? "Solved. " : "Finished. "}The answers and the worked solution open after the due date, <LocalTime iso={problem.solutionAfter} />.
+        </p>
+      ) : null}
+
       {problem.final ? (
         <section aria-labelledby={`solution-${problem.id}`} className="card space-y-3 p-4" data-solution>
-          <h2 id={`solution-${problem.id}`} ref={solutionRef} tabIndex={-1} className="text-xl">
-            {problem.status === "solved" ? "Solved — here is the worked solution" : "Out of tries — here is the worked solution"}
-          </h2>
+          <SubHeading id={`solution-${problem.id}`} ref={solutionRef} tabIndex={-1} className="text-xl">
+            {problem.status === "solved" ? "Solved — here is the worked solution" : problem.status === "failed" ? "Out of tries — here is the worked solution" : "Closed — here is the worked solution"}
+          </SubHeading>
           <dl className="grid gap-2 sm:grid-cols-2">
             {problem.parts.map((p) => (
               <div key={p.key} className="rounded border border-rule bg-paper p-2">
@@ -140,18 +178,24 @@ export function ProblemWorkspace({ initial, onAnother, signedIn, headingLevel = 
               <li key={i} dangerouslySetInnerHTML={{ __html: step }} />
             ))}
           </ol>
-          <div data-chrome className="flex flex-wrap gap-3 pt-2">
-            <button type="button" className="btn-primary" onClick={another} disabled={busy}>
-              Another problem like this
-            </button>
-            <Link className="btn-quiet" href="/practice">
-              Choose another skill
-            </Link>
-            <Link className="btn-quiet" href={problem.lessonHref}>
-              Read the lesson
-            </Link>
-          </div>
-          {signedIn ? null : (
+          {assignment ? (
+            <p data-chrome>
+              <Link href={problem.lessonHref}>Read the lesson</Link>
+            </p>
+          ) : (
+            <div data-chrome className="flex flex-wrap gap-3 pt-2">
+              <button type="button" className="btn-primary" onClick={another} disabled={busy}>
+                Another problem like this
+              </button>
+              <Link className="btn-quiet" href="/practice">
+                Choose another skill
+              </Link>
+              <Link className="btn-quiet" href={problem.lessonHref}>
+                Read the lesson
+              </Link>
+            </div>
+          )}
+          {signedIn || assignment ? null : (
             <p className="text-sm text-ink-soft">
               <Link href="/signup?callbackUrl=/practice">Sign up</Link> to keep your progress and unlock the next level as you master each one.
             </p>

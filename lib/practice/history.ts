@@ -17,7 +17,8 @@ export type HistoryPage = { problems: HistoryRow[]; page: number; pages: number;
 
 export async function practiceHistory(user: SessionUser, page: number): Promise<HistoryPage> {
   const { rows, count } = await db().models.PracticeProblem.findAndCountAll({
-    where: { userId: user.id },
+    // The history lists practice only; assignment problems live on their assignment's page.
+    where: { userId: user.id, assignmentItemId: null },
     order: [["createdAt", "DESC"]],
     limit: HISTORY_PAGE_SIZE,
     offset: (page - 1) * HISTORY_PAGE_SIZE,
@@ -42,6 +43,7 @@ export async function practiceHistory(user: SessionUser, page: number): Promise<
 export async function masteryFor(user: SessionUser | null): Promise<SkillMastery[]> {
   const skills = SKILLS.filter((s) => PROBLEM_KINDS.some((k) => k.skill === s));
   if (!user) return masteryOf(skills, []);
+  // Finished assignment problems count too: they are the same kinds, graded the same way.
   const rows = await db().models.PracticeProblem.findAll({
     where: { userId: user.id, status: { [Op.ne]: "open" } },
     attributes: ["kind", "level", "status"],

@@ -42,7 +42,13 @@ export type ProblemView = {
 export type ProblemUpdate = Pick<ProblemView, "id" | "status" | "attemptsUsed" | "attemptsAllowed" | "results" | "final">;
 
 export type StoredProblem = { id: string; kind: string; level: number; seed: number; status: ProblemStatus; attemptsAllowed: number; attemptsUsed: number };
-export type StoredAttempt = { part: string; raw: string; value: string; verdict: string; pattern: string | null; submission: number };
+export type StoredAttempt = { part: string; raw: string; value: string; verdict: string; pattern: string | null; submission: number; createdAt: string };
+
+/**
+ * How close an answer must be: "half" a graduation (practice, and the default for assignments) or a
+ * "full" graduation, which an instructor may allow for an assignment item. Counts stay exact.
+ */
+export type Tolerance = "half" | "full";
 
 export function kindOrThrow(key: string): AnyProblemKind {
   const kind = findKind(key);
@@ -96,8 +102,8 @@ export type WorkedProblem = {
 const WORKED_KEPT = 5000;
 const worked = new Map<string, WorkedProblem>();
 
-export function workOut(problem: Pick<StoredProblem, "kind" | "level" | "seed">): WorkedProblem {
-  const key = `${problem.kind}:${problem.level}:${problem.seed}`;
+export function workOut(problem: Pick<StoredProblem, "kind" | "level" | "seed">, tolerance: Tolerance = "half"): WorkedProblem {
+  const key = `${problem.kind}:${problem.level}:${problem.seed}:${tolerance}`;
   const kept = worked.get(key);
   if (kept) {
     // Map order is insertion order: moving a hit to the end makes the first key the least recently used.
@@ -107,32 +113,44 @@ export function workOut(problem: Pick<StoredProblem, "kind" | "level" | "seed">)
   }
   const kind = kindOrThrow(problem.kind);
   const params = kind.generate(problem.seed, problem.level as Level);
-  const work: WorkedProblem = { kind, params, parts: kind.parts(params), expected: kind.solve(params) };
+  const parts = kind.parts(params).map((part) => (tolerance === "full" ? wholeGraduation(part) : part));
+  const work: WorkedProblem = { kind, params, parts, expected: kind.solve(params) };
   worked.set(key, work);
   if (worked.size > WORKED_KEPT) worked.delete(worked.keys().next().value!);
   return work;
 }
 
-function finalOf(problem: StoredProblem, { kind, params, parts, expected }: WorkedProblem): ProblemView["final"] {
-  if (problem.status === "open") return null;
+/** A part that accepts an answer a whole graduation off (never less than the kind already allows). */
+function wholeGraduation(part: ProblemPart): ProblemPart {
+  if (part.answer === "count") return part;
+  const graduation = new Fraction(1, part.precision);
+  return { ...part, tolerance: part.tolerance && part.tolerance.compare(graduation) > 0 ? part.tolerance : graduation };
+}
+
+function finalOf(revealed: boolean, { kind, params, parts, expected }: WorkedProblem): ProblemView["final"] {
+  if (!revealed) return null;
   return {
     expected: Object.fromEntries(parts.map((p) => [p.key, expectedText(p, expected[p.key])])),
     stepsHtml: kind.explain(params).map(inlineMathToHtml),
   };
 }
 
-export function buildUpdate(problem: StoredProblem, results: Record<string, PartResult | null>, work: WorkedProblem): ProblemUpdate {
+/**
+ * `revealed` decides whether the answers go out. Practice reveals a problem once it is solved or out
+ * of tries; an assignment decides by its own rule (lib/assignments/work.ts) and passes it in.
+ */
+export function buildUpdate(problem: StoredProblem, results: Record<string, PartResult | null>, work: WorkedProblem, revealed = problem.status !== "open"): ProblemUpdate {
   return {
     id: problem.id,
     status: problem.status,
     attemptsAllowed: problem.attemptsAllowed,
     attemptsUsed: problem.attemptsUsed,
     results: Object.fromEntries(work.parts.map((p) => [p.key, results[p.key] ?? null])),
-    final: finalOf(problem, work),
+    final: finalOf(revealed, work),
   };
 }
 
-export function buildView(problem: StoredProblem, results: Record<string, PartResult | null>, work: WorkedProblem = workOut(problem)): ProblemView {
+export function buildView(problem: StoredProblem, results: Record<string, PartResult | null>, work: WorkedProblem = workOut(problem), revealed = problem.status !== "open"): ProblemView {
   const { kind, params, parts } = work;
   const level = problem.level as Level;
   work.prompt ??= (() => {
@@ -140,7 +158,7 @@ export function buildView(problem: StoredProblem, results: Record<string, PartRe
     return { html: mathTextToHtml(prompt.text), figure: prompt.figure ?? null };
   })();
   return {
-    ...buildUpdate(problem, results, work),
+    ...buildUpdate(problem, results, work, revealed),
     kind: kind.key,
     title: kind.title,
     skill: kind.skill,

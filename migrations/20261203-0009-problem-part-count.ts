@@ -1,0 +1,11 @@
+import { DataTypes, type QueryInterface } from "sequelize";
+
+// An assignment's score divides each problem's points among its parts. Storing the count when a
+// variant is made lets the scores be summed in SQL without rebuilding every problem from its seed.
+export async function up({ context: qi }: { context: QueryInterface }) {
+  await qi.addColumn("practice_problems", "part_count", { type: DataTypes.INTEGER, allowNull: true });
+}
+
+export async function down({ context: qi }: { context: QueryInterface }) {
+  await qi.removeColumn("practice_problems", "part_count");
+}
