@@ -29,8 +29,8 @@ export function partCountOf(kindKey: string, level: number, seed: number): numbe
 /**
  * Makes sure the student has a stored problem for every variant of every item (INSERT OR IGNORE on
  * the unique (item, student, variant) index, so two tabs opening at once make one set), and that each
- * allows the tries the assignment gives them now: an extension's extra tries reopen a problem that
- * ran out; tries taken away close one that has used them up.
+ * problem still open allows the tries the assignment gives them now (tries taken away close one that
+ * has used them up). A finished problem is never reopened: its answers may already have been shown.
  */
 export async function ensureVariants(items: readonly VariantItem[], studentId: number, attemptsAllowed: number): Promise<void> {
   if (items.length === 0) return;
@@ -38,8 +38,8 @@ export async function ensureVariants(items: readonly VariantItem[], studentId: n
   const itemIds = items.map((i) => i.id);
   const inItems = `assignment_item_id IN (${itemIds.map(() => "?").join(", ")})`;
   // Usually everything is there already: one small read, and no generator runs.
-  const existing = await sequelize.query<{ itemId: number; variant: number; attemptsAllowed: number }>(
-    `SELECT assignment_item_id AS itemId, variant, attempts_allowed AS attemptsAllowed FROM practice_problems WHERE user_id = ? AND ${inItems}`,
+  const existing = await sequelize.query<{ itemId: number; variant: number; attemptsAllowed: number; status: string }>(
+    `SELECT assignment_item_id AS itemId, variant, attempts_allowed AS attemptsAllowed, status FROM practice_problems WHERE user_id = ? AND ${inItems}`,
     { replacements: [studentId, ...itemIds], type: QueryTypes.SELECT },
   );
   const have = new Set(existing.map((r) => `${r.itemId}:${r.variant}`));
@@ -53,7 +53,7 @@ export async function ensureVariants(items: readonly VariantItem[], studentId: n
       rows.push([randomUUID(), studentId, item.id, variant, item.kind, item.level, seed, attemptsAllowed, partCountOf(item.kind, item.level, seed), now, now]);
     }
   }
-  const stale = existing.some((r) => r.attemptsAllowed !== attemptsAllowed);
+  const stale = existing.some((r) => r.status === "open" && r.attemptsAllowed !== attemptsAllowed);
   if (rows.length === 0 && !stale) return;
   await sequelize.transaction(async (transaction) => {
     if (rows.length > 0) await sequelize.query(
@@ -65,15 +65,11 @@ export async function ensureVariants(items: readonly VariantItem[], studentId: n
     if (stale) await sequelize.query(
       `UPDATE practice_problems
        SET attempts_allowed = ?,
-           status = CASE WHEN status = 'failed' AND attempts_used < ? THEN 'open'
-                         WHEN status = 'open' AND attempts_used >= ? THEN 'failed'
-                         ELSE status END,
-           finished_at = CASE WHEN status = 'failed' AND attempts_used < ? THEN NULL
-                              WHEN status = 'open' AND attempts_used >= ? THEN ?
-                              ELSE finished_at END,
+           status = CASE WHEN attempts_used >= ? THEN 'failed' ELSE status END,
+           finished_at = CASE WHEN attempts_used >= ? THEN ? ELSE finished_at END,
            updated_at = ?
-       WHERE user_id = ? AND ${inItems} AND attempts_allowed <> ?`,
-      { replacements: [attemptsAllowed, attemptsAllowed, attemptsAllowed, attemptsAllowed, attemptsAllowed, now, now, studentId, ...itemIds, attemptsAllowed], transaction, type: QueryTypes.UPDATE },
+       WHERE user_id = ? AND ${inItems} AND status = 'open' AND attempts_allowed <> ?`,
+      { replacements: [attemptsAllowed, attemptsAllowed, attemptsAllowed, now, now, studentId, ...itemIds, attemptsAllowed], transaction, type: QueryTypes.UPDATE },
     );
   });
 }

@@ -224,6 +224,20 @@ describe("answers before final", () => {
     expect(after.problem.final.stepsHtml.length).toBeGreaterThan(1);
   });
 
+  it("extra tries from an extension reach open problems but never reopen one whose answers were shown", async () => {
+    const { id, itemIds } = await createAssignment(file, classId, { attemptsAllowed: 1 }, [{ kind: KIND, level: 1, problemCount: 2, points: 2 }]);
+    const [spent, fresh] = (await work(avery, id)).problems;
+    const { wrong } = variantAnswers(secret, itemIds[0], avery.id, 0, KIND, 1);
+    const failed = await (await call(avery, `/api/assignments/${id}/problems/${spent.id}/answers`, { answers: wrong })).json();
+    expect(failed.problem.status).toBe("failed");
+    expect(failed.problem.final).not.toBeNull();
+    await withDatabase(file, (db) => db.models.AssignmentExtension.create({ assignmentId: id, studentId: avery.id, extraAttempts: 2, grantedBy: instructor.id }));
+    const after = (await work(avery, id)).problems;
+    expect(after.find((p) => p.id === spent.id)).toMatchObject({ status: "failed" });
+    expect((await storedFor(fresh.id)).problem).toMatchObject({ status: "open", attemptsAllowed: 3 });
+    expect((await call(avery, `/api/assignments/${id}/problems/${spent.id}/answers`, { answers: wrong })).status).toBe(409);
+  });
+
   it("a 'full graduation' item takes an answer one graduation off as right", async () => {
     const { id, itemIds } = await createAssignment(file, classId, {}, [{ kind: KIND, level: 1, problemCount: 1, points: 2, tolerance: "full" }]);
     const problem = (await work(avery, id)).problems[0];
