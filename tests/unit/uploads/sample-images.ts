@@ -7,7 +7,7 @@ type Format = "jpeg" | "png" | "webp";
 
 /** A noisy picture (so it compresses like a photo) with camera metadata and, if asked, an orientation tag. */
 export async function cameraPhoto(format: Format, { width = 640, height = 480, orientation }: { width?: number; height?: number; orientation?: number } = {}): Promise<Buffer> {
-  let image = sharp({ create: { width, height, channels: 3, noise: { type: "gaussian", mean: 128, sigma: 40 } } })
+  let image = sharp({ create: { width, height, channels: 3, background: "#808080", noise: { type: "gaussian", mean: 128, sigma: 40 } } })
     .withExif({
       IFD0: { Copyright: "secret-copyright", Artist: "secret-artist", Make: "SecretCam" },
       IFD3: { GPSLatitudeRef: "N", GPSLatitude: "47/1 36/1 2/1", GPSLongitudeRef: "W", GPSLongitude: "122/1 19/1 55/1" },
