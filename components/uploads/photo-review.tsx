@@ -22,8 +22,9 @@ export function PhotoReview({ assignmentId, studentId, initial }: { assignmentId
 
   const saved = (upload: UploadView) => mutate((current) => ({ uploads: (current ?? fallback).uploads.map((u) => (u.id === upload.id ? upload : u)) }), { revalidate: false });
 
+  // Phone file names are long unbroken words; they wrap instead of widening a 360 px screen.
   return (
-    <section aria-labelledby={headingId} className="space-y-4">
+    <section aria-labelledby={headingId} className="space-y-4 [overflow-wrap:anywhere]">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 id={headingId} className="text-xl">
           Shop photos
@@ -36,7 +37,7 @@ export function PhotoReview({ assignmentId, studentId, initial }: { assignmentId
       ) : (
         <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" aria-label="The student's photos">
           {uploads.map((upload, index) => (
-            <li key={upload.id} className="card space-y-3 p-3">
+            <li key={upload.id} className="card min-w-0 space-y-3 p-3">
               <PhotoThumb upload={upload} label={`Photo ${index + 1}: ${upload.originalName}`} />
               <CommentBox upload={upload} index={index} onSaved={saved} />
             </li>
@@ -83,7 +84,8 @@ function CommentBox({ upload, index, onSaved }: { upload: UploadView; index: num
       </label>
       <textarea
         id={fieldId}
-        className="input min-h-24 py-2"
+        rows={4}
+        className="input min-h-24 py-2 [field-sizing:content]"
         value={text}
         disabled={!hydrated}
         aria-invalid={over || state.kind === "error" ? true : undefined}
@@ -108,7 +110,7 @@ function CommentBox({ upload, index, onSaved }: { upload: UploadView; index: num
             "Not saved yet."
           ) : upload.comment && upload.commentedAt ? (
             <>
-              Saved{upload.commentByName ? ` by ${upload.commentByName}` : ""} <LocalTime iso={upload.commentedAt} />
+              Saved{upload.commentByName ? ` by ${upload.commentByName}` : ""}, <LocalTime iso={upload.commentedAt} />
             </>
           ) : (
             `Up to ${MAX_COMMENT_LENGTH} characters.`

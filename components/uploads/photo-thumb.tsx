@@ -17,7 +17,7 @@ export function PhotoThumb({ upload, label }: { upload: UploadView; label: strin
         <span className="block truncate font-semibold text-ink" title={upload.originalName}>
           {upload.originalName}
         </span>
-        <LocalTime iso={upload.uploadedAt} /> · <span className="measure">{upload.width} × {upload.height}</span> · {formatBytes(upload.bytes)}
+        <LocalTime iso={upload.uploadedAt} /> · <span className="measure">{upload.width}×{upload.height}</span> px · {formatBytes(upload.bytes)}
       </figcaption>
     </figure>
   );

@@ -55,7 +55,7 @@ export function PhotoUploader({ assignmentId, initial, open }: { assignmentId: n
     let left = room;
     const added: Pending[] = Array.from(files).map((file, i) => {
       const key = `${Date.now()}-${i}-${file.name}`;
-      if (file.size > MAX_PHOTO_BYTES) return { key, file, progress: 0, state: "failed", error: tooBigMessage(file.name, file.size) };
+      if (file.size > MAX_PHOTO_BYTES) return { key, file, progress: 0, state: "failed", error: tooBigMessage(file.size) };
       if (left <= 0) return { key, file, progress: 0, state: "failed", error: `Not sent: an assignment takes ${MAX_PHOTOS_PER_ASSIGNMENT} photos at most. Delete one to make room.` };
       left -= 1;
       return { key, file, progress: 0, state: "waiting" };
@@ -80,8 +80,9 @@ export function PhotoUploader({ assignmentId, initial, open }: { assignmentId: n
     return null;
   };
 
+  // Phone file names are long unbroken words; they wrap instead of widening a 360 px screen.
   return (
-    <section aria-labelledby={headingId} className="space-y-4">
+    <section aria-labelledby={headingId} className="space-y-4 [overflow-wrap:anywhere]">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 id={headingId} className="text-xl">
           Shop photos
@@ -226,7 +227,7 @@ function StoredPhoto({ upload, canDelete, onDelete }: { upload: UploadView; canD
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   return (
-    <li className="card space-y-3 p-3">
+    <li className="card min-w-0 space-y-3 p-3">
       <PhotoThumb upload={upload} label={`Your photo ${upload.originalName}`} />
       <PhotoComment upload={upload} />
       {error ? (

@@ -30,10 +30,12 @@ export type UploadView = {
 
 /** "3.4 MB", "820 KB": sizes as a phone's file picker shows them. */
 export function formatBytes(bytes: number): string {
-  if (bytes >= 1024 * 1024) return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
-  return `${Math.max(1, Math.round(bytes / 1024))} KB`;
+  // A no-break space keeps the number and its unit on one line.
+  if (bytes >= 1024 * 1024) return `${(bytes / (1024 * 1024)).toFixed(1)}\u00a0MB`;
+  return `${Math.max(1, Math.round(bytes / 1024))}\u00a0KB`;
 }
 
-export function tooBigMessage(name: string, bytes: number): string {
-  return `“${name}” is ${formatBytes(bytes)}; a photo can be at most ${formatBytes(MAX_PHOTO_BYTES)}. Send a smaller copy (most phones offer “medium” or “large” when sharing).`;
+/** Shown under the file's name, so it does not repeat it. */
+export function tooBigMessage(bytes: number): string {
+  return `This one is ${formatBytes(bytes)}; a photo can be at most ${formatBytes(MAX_PHOTO_BYTES)}. Send a smaller copy (most phones offer “medium” or “large” when sharing).`;
 }

@@ -155,7 +155,7 @@ describe("shop-photo uploads", () => {
     const big = Buffer.concat([await cameraPhoto("jpeg"), crypto.randomBytes(11 * 1024 * 1024)]);
     const res = await upload("owner", ids.openAssignment, big);
     expect(res.status).toBe(413);
-    expect(await res.json()).toEqual({ error: { code: "too_large", message: expect.stringMatching(/^That upload is 11\.\d MB; a photo can be at most 10\.0 MB\./) } });
+    expect(await res.json()).toEqual({ error: { code: "too_large", message: expect.stringMatching(/^That upload is 11\.\d\sMB; a photo can be at most 10\.0\sMB\./) } });
 
     // Streamed without a Content-Length, the server cannot refuse up front; it keeps none of it past the cap.
     const boundary = "----shop-photo-boundary";
@@ -177,7 +177,7 @@ describe("shop-photo uploads", () => {
       duplex: "half",
     } as RequestInit);
     expect(streamed.status).toBe(413);
-    expect((await streamed.json()).error).toEqual({ code: "too_large", message: expect.stringMatching(/^That upload is 12\.\d MB; a photo can be at most 10\.0 MB\./) });
+    expect((await streamed.json()).error).toEqual({ code: "too_large", message: expect.stringMatching(/^That upload is 12\.\d\sMB; a photo can be at most 10\.0\sMB\./) });
     expect(await rowCount(ids.users.owner, ids.openAssignment)).toBe(before);
     expect((await as("owner")(`/api/assignments/${ids.openAssignment}/uploads`)).status).toBe(200);
   });

@@ -57,7 +57,7 @@ describe("inspectPhoto decides by content", () => {
     const big = Buffer.concat([await cameraPhoto("jpeg"), Buffer.alloc(MAX_PHOTO_BYTES)]);
     const error = await refusal(inspectPhoto(big));
     expect(error.status).toBe(413);
-    expect(error.message).toMatch(/limit is 10\.0 MB/);
+    expect(error.message).toMatch(/limit is 10\.0\sMB/);
   });
 });
 
