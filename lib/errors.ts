@@ -7,6 +7,7 @@ export type ErrorCode =
   | "forbidden"
   | "not_found"
   | "conflict"
+  | "too_large"
   | "rate_limited"
   | "unavailable"
   | "internal";
@@ -17,6 +18,7 @@ const statusOf: Record<ErrorCode, number> = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  too_large: 413,
   rate_limited: 429,
   unavailable: 503,
   internal: 500,
