@@ -6,9 +6,11 @@ import { WorkDates } from "@/components/assignments/work-dates";
 import { Alert } from "@/components/ui/alert";
 import { LocalTime } from "@/components/ui/local-time";
 import { MarkdownText } from "@/components/ui/markdown";
+import { PhotoUploader } from "@/components/uploads/photo-uploader";
 import { studentAssignment } from "@/lib/assignments/work";
 import { requireUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
+import { listUploads } from "@/lib/uploads/store";
 
 export const metadata: Metadata = { title: "Assignment" };
 
@@ -20,6 +22,7 @@ export default async function StudentAssignmentPage({ params }: PageProps<"/my-c
     throw error;
   });
   const { assignment, timing } = view;
+  const photos = await listUploads(user, assignment.id, user.id);
 
   return (
     <div className="max-w-3xl space-y-6">
@@ -60,6 +63,9 @@ export default async function StudentAssignmentPage({ params }: PageProps<"/my-c
       ) : null}
 
       <WorkClient initial={view} />
+
+      {/* Photos are taken while the assignment takes this student's work, as answers are. */}
+      <PhotoUploader assignmentId={assignment.id} initial={photos} open={timing.window === "open" || timing.window === "late-window"} />
     </div>
   );
 }

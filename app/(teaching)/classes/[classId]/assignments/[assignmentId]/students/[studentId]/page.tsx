@@ -4,9 +4,11 @@ import { notFound } from "next/navigation";
 import { SubmissionProblem } from "@/components/assignments/submissions-problem";
 import { LateFlag, StudentStatusBadge } from "@/components/assignments/student-status-badge";
 import { LocalTime } from "@/components/ui/local-time";
+import { PhotoReview } from "@/components/uploads/photo-review";
 import { classNameOf, studentReview } from "@/lib/assignments/student-review";
 import { requireRole } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
+import { listUploads } from "@/lib/uploads/store";
 import { teacherAssignmentOr404 } from "../load";
 
 export const metadata: Metadata = { title: "A student's work" };
@@ -15,12 +17,16 @@ export default async function StudentWorkPage({ params }: PageProps<"/classes/[c
   const user = await requireRole("instructor", "admin");
   const { classId, assignmentId, studentId } = await params;
   const assignment = await teacherAssignmentOr404(user, classId, assignmentId);
-  const [review, className] = await Promise.all([
+  const [review, className, photos] = await Promise.all([
     studentReview(assignment, Number(studentId)).catch((error: unknown) => {
       if (error instanceof AppError && error.code === "not_found") notFound();
       throw error;
     }),
     classNameOf(assignment.classId),
+    listUploads(user, assignment.id, Number(studentId)).catch((error: unknown) => {
+      if (error instanceof AppError && error.code === "not_found") notFound();
+      throw error;
+    }),
   ]);
   const { student, score, extension } = review;
   const listHref = `/classes/${assignment.classId}/assignments/${assignment.id}/students`;
@@ -79,6 +85,8 @@ export default async function StudentWorkPage({ params }: PageProps<"/classes/[c
           Tries allowed per problem: {review.assignment.attemptsAllowed}.
         </p>
       </section>
+
+      <PhotoReview assignmentId={assignment.id} studentId={student.id} initial={photos} />
 
       <section aria-labelledby="problems-heading" className="space-y-4">
         <h2 id="problems-heading" className="text-xl">
