@@ -80,7 +80,9 @@ test("a student sends shop photos, the instructor comments, the student reads it
   await expect(photos.getByText("1 of 5 photos")).toBeVisible({ timeout: 15_000 });
   const stored = photos.getByRole("img", { name: "Your photo mock-up.jpg" });
   await expect(stored).toBeVisible();
-  expect(await stored.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(320);
+  // The thumbnail is fetched from the photo route after the list updates; wait for it to decode.
+  await stored.scrollIntoViewIfNeeded();
+  await expect.poll(() => stored.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(320);
   await expect(photos.getByText("That file is a PDF, not a photo. Send a JPEG, PNG or WebP.")).toBeVisible();
   await photos.getByRole("button", { name: "Dismiss the message about layout-plan.jpg" }).click();
   await expect(photos.getByText(/That file is a PDF/)).toHaveCount(0);
