@@ -158,7 +158,7 @@ export async function seedDemo({ sequelize, models }: Database, cost: number): P
         { transaction },
       );
       await AssignmentItem.bulkCreate(
-        a.items.map((item, position) => ({ ...item, assignmentId: created.id, position, tolerance: "half" as const })),
+        a.items.map((item, index) => ({ ...item, assignmentId: created.id, position: index + 1, tolerance: "half" as const })),
         { transaction },
       );
     }
