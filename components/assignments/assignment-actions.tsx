@@ -6,8 +6,8 @@ import { useId, useState } from "react";
 import { pluralize } from "@/lib/assignments/teacher-format";
 import { Alert } from "@/components/ui/alert";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
-import { ConfirmDialog } from "./confirm-dialog";
+import { callApi } from "@/components/ui/call-api";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 type Props = {
   assignment: { id: number; classId: number; title: string; status: "draft" | "published"; locked: boolean; activeStudents: number; className: string };
@@ -38,7 +38,7 @@ export function AssignmentActions({ assignment: a, targets }: Props) {
         : await callApi<{ emailed?: number; assignment: { id: number; classId: number } }>(`${base}/${action}`, "POST", action === "duplicate" ? { classId: target } : {});
     setBusy(false);
     setPending(null);
-    if (!result.ok) return setError(result.error.message);
+    if (!result.ok) return setError(result.message);
     if (action === "delete") {
       router.push(`/classes/${a.classId}/assignments?deleted=1`);
       router.refresh();

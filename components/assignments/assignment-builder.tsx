@@ -13,11 +13,11 @@ import { Alert } from "@/components/ui/alert";
 import { MarkdownText } from "@/components/ui/markdown";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 import { BuilderItems } from "./builder-items";
 import { BuilderSchedule } from "./builder-schedule";
 import { initialValues, toPayload, totalPoints, type BuilderValues } from "./builder-values";
-import { ConfirmDialog } from "./confirm-dialog";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useSamplePreview } from "./sample-preview";
 
 type Props = {
@@ -69,7 +69,7 @@ export function AssignmentBuilder({ classId, className, activeStudents, kinds, e
       ? await callApi<{ assignment: TeacherAssignment }>(`/api/assignments/${savedId}`, "PATCH", data)
       : await callApi<{ assignment: TeacherAssignment }>(`/api/classes/${classId}/assignments`, "POST", data);
     if (!result.ok) {
-      showServerError(result.error);
+      showServerError(result);
       return null;
     }
     setSavedId(result.data.assignment.id);
@@ -105,7 +105,7 @@ export function AssignmentBuilder({ classId, className, activeStudents, kinds, e
     setBusy(false);
     setConfirming(null);
     if (!result.ok) {
-      showServerError({ ...result.error, message: `Saved as a draft, but not published: ${result.error.message}` });
+      showServerError({ ...result, message: `Saved as a draft, but not published: ${result.message}` });
       return;
     }
     router.push(`/classes/${classId}/assignments/${id}?published=${result.data.emailed}`);

@@ -12,8 +12,8 @@ import { Alert } from "@/components/ui/alert";
 import { LocalTime, fromLocalInput, toLocalInput } from "@/components/ui/local-time";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
-import { ConfirmDialog } from "./confirm-dialog";
+import { callApi } from "@/components/ui/call-api";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 type Student = { studentId: number; name: string; email: string; status: "active" | "invited" };
 type Values = { studentId: string; dueAt: string; extraAttempts: number | string; note: string };
@@ -42,9 +42,9 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
     setDone(undefined);
     const result = await callApi<{ extension: ExtensionView }>(`/api/assignments/${assignmentId}/extensions`, "PUT", data);
     if (!result.ok) {
-      const fields = Object.entries(result.error.fields ?? {}).filter(([k]) => ["studentId", "dueAt", "extraAttempts", "note"].includes(k));
+      const fields = Object.entries(result.fields ?? {}).filter(([k]) => ["studentId", "dueAt", "extraAttempts", "note"].includes(k));
       for (const [name, message] of fields) setError(name as FieldPath<Values>, { type: "server", message });
-      if (fields.length === 0) setFormError(result.error.message);
+      if (fields.length === 0) setFormError(result.message);
       return;
     }
     const saved = result.data.extension;
@@ -65,7 +65,7 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
     setBusy(true);
     const result = await callApi<void>(`/api/assignments/${assignmentId}/extensions/${removing.studentId}`, "DELETE");
     setBusy(false);
-    if (!result.ok) setFormError(result.error.message);
+    if (!result.ok) setFormError(result.message);
     else {
       setExtensions((list) => list.filter((e) => e.studentId !== removing.studentId));
       setDone(`Extension removed for ${removing.studentName}.`);

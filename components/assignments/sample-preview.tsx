@@ -4,7 +4,7 @@ import { useCallback, useEffect, useId, useRef, useState } from "react";
 import type { SamplePreview } from "@/lib/assignments/preview";
 import { ProblemFigureView } from "@/components/practice/problem-figure";
 import { Alert } from "@/components/ui/alert";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 
 export type PreviewRequest = { kind: string; level: number; tolerance: "half" | "full"; itemNumber: number };
 
@@ -25,7 +25,7 @@ export function useSamplePreview() {
     const result = await callApi<{ preview: SamplePreview }>("/api/assignments/preview", "POST", { kind: request.kind, level: request.level, tolerance: request.tolerance, sample });
     // A slower answer to an earlier click must not replace a newer sample.
     if (ticket !== latest.current) return;
-    setState((s) => (s ? { ...s, loading: false, preview: result.ok ? result.data.preview : s.preview, error: result.ok ? undefined : result.error.message } : s));
+    setState((s) => (s ? { ...s, loading: false, preview: result.ok ? result.data.preview : s.preview, error: result.ok ? undefined : result.message } : s));
   }, []);
 
   const dialog = <SamplePreviewDialog state={state} onAnother={() => state && show(state.request, (state.sample + 1) % 10000)} onClose={() => setState(null)} />;

@@ -9,7 +9,7 @@ import { acceptNewAccountSchema, type AcceptNewAccountInput } from "@/lib/classe
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 
 /** For a visitor without an account: name and password make a student account, then sign in. */
 export function AcceptWithNewAccount({ token, email, name }: { token: string; email: string; name: string }) {

@@ -1,8 +1,9 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useId, useRef, useState, type ReactNode } from "react";
-import { callApi } from "./api";
+import { useState, type ReactNode } from "react";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { callApi } from "@/components/ui/call-api";
 
 type Confirm = { title: string; body: ReactNode; confirmLabel: string };
 
@@ -30,8 +31,7 @@ const TONES = {
 /** A button that calls one class API route, optionally after a confirmation dialog, then refreshes the page. */
 export function ActionButton({ url, method = "POST", label, accessibleLabel, pendingLabel, confirm, tone = "quiet", then, className }: Props) {
   const router = useRouter();
-  const dialog = useRef<HTMLDialogElement>(null);
-  const titleId = useId();
+  const [asking, setAsking] = useState(false);
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string>();
 
@@ -44,7 +44,7 @@ export function ActionButton({ url, method = "POST", label, accessibleLabel, pen
       setError(result.message);
       return;
     }
-    dialog.current?.close();
+    setAsking(false);
     if (then) router.push(then);
     router.refresh();
   };
@@ -56,7 +56,7 @@ export function ActionButton({ url, method = "POST", label, accessibleLabel, pen
         className={`${TONES[tone]} ${className ?? ""}`}
         aria-label={accessibleLabel}
         disabled={pending}
-        onClick={() => (confirm ? (setError(undefined), dialog.current?.showModal()) : run())}
+        onClick={() => (confirm ? (setError(undefined), setAsking(true)) : run())}
       >
         {pending && !confirm ? pendingLabel : label}
       </button>
@@ -66,27 +66,19 @@ export function ActionButton({ url, method = "POST", label, accessibleLabel, pen
         </span>
       ) : null}
       {confirm ? (
-        <dialog ref={dialog} aria-labelledby={titleId} className="card m-auto w-[min(28rem,calc(100vw-2rem))] p-0 text-left font-normal text-ink backdrop:bg-ink/40">
-          <div className="space-y-4 p-5">
-            <h2 id={titleId} className="text-lg">
-              {confirm.title}
-            </h2>
-            <div className="space-y-2 text-ink-soft">{confirm.body}</div>
-            {error ? (
-              <p role="alert" className="font-semibold text-danger">
-                {error}
-              </p>
-            ) : null}
-            <div className="flex flex-wrap justify-end gap-2">
-              <button type="button" className="btn-quiet" onClick={() => dialog.current?.close()} autoFocus>
-                Cancel
-              </button>
-              <button type="button" className={tone === "primary" ? TONES.primary : TONES.danger} disabled={pending} onClick={run}>
-                {pending ? pendingLabel : confirm.confirmLabel}
-              </button>
-            </div>
-          </div>
-        </dialog>
+        <ConfirmDialog
+          open={asking}
+          title={confirm.title}
+          confirmLabel={confirm.confirmLabel}
+          tone={tone === "primary" ? "primary" : "danger"}
+          busy={pending}
+          busyLabel={pendingLabel}
+          error={error}
+          onConfirm={run}
+          onCancel={() => setAsking(false)}
+        >
+          {confirm.body}
+        </ConfirmDialog>
       ) : null}
     </>
   );

@@ -8,7 +8,7 @@ import { classSchema, type ClassFormInput, type ClassInput } from "@/lib/classes
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 
 type Props = { classId?: number; initial?: ClassFormInput };
 

@@ -11,7 +11,7 @@ import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { ActionButton } from "./action-button";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 
 type Values = z.input<typeof coInstructorSchema>;
 

@@ -8,7 +8,7 @@ import type { InviteOutcome } from "@/lib/classes/invitations";
 import { inviteSchema, MAX_INVITES_AT_ONCE, type InviteInput } from "@/lib/classes/schemas";
 import { Alert } from "@/components/ui/alert";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 import { SendProgress } from "./send-progress";
 
 const OUTCOME_STYLE = { sent: "text-ok", resent: "text-chalk-dark", refused: "text-danger" } as const;

@@ -9,7 +9,7 @@ import { joinClassSchema, type JoinClassInput } from "@/lib/classes/schemas";
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 
 export function JoinClassForm({ initialCode = "" }: { initialCode?: string }) {
   const router = useRouter();

@@ -6,7 +6,7 @@ import type { ImportPreview, ImportResult } from "@/lib/classes/import";
 import { MAX_IMPORT_BYTES, MAX_IMPORT_ROWS } from "@/lib/classes/schemas";
 import { Alert } from "@/components/ui/alert";
 import { useHydrated } from "@/components/ui/use-hydrated";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 import { ImportPreviewTable } from "./import-preview-table";
 import { SendProgress } from "./send-progress";
 

@@ -2,7 +2,7 @@
 
 import useSWR from "swr";
 import type { BatchProgress } from "@/lib/classes/invitations";
-import { callApi } from "./api";
+import { callApi } from "@/components/ui/call-api";
 
 async function fetchProgress(url: string): Promise<BatchProgress> {
   const result = await callApi<BatchProgress>(url, "GET");

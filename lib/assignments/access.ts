@@ -3,6 +3,7 @@ import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
 import { canTeach } from "@/lib/classes/queries";
+import type { Assignment } from "@/models";
 import type { LateRules, StudentExtension } from "./policy";
 
 /** An assignment as lib/ hands it around: plain data, dates as Date. */
@@ -20,9 +21,7 @@ export type AssignmentRecord = LateRules & {
 
 export type AssignmentItemRecord = { id: number; assignmentId: number; position: number; kind: string; level: 1 | 2 | 3; problemCount: number; tolerance: "half" | "full"; points: number };
 
-async function load(assignmentId: number): Promise<AssignmentRecord> {
-  const row = Number.isSafeInteger(assignmentId) ? await db().models.Assignment.findByPk(assignmentId) : null;
-  if (!row) throw new AppError("not_found", "There is no such assignment.");
+export function assignmentRecord(row: Assignment): AssignmentRecord {
   return {
     id: row.id,
     classId: row.classId,
@@ -38,6 +37,12 @@ async function load(assignmentId: number): Promise<AssignmentRecord> {
     status: row.status,
     publishedAt: row.publishedAt,
   };
+}
+
+async function load(assignmentId: number): Promise<AssignmentRecord> {
+  const row = Number.isSafeInteger(assignmentId) ? await db().models.Assignment.findByPk(assignmentId) : null;
+  if (!row) throw new AppError("not_found", "There is no such assignment.");
+  return assignmentRecord(row);
 }
 
 export async function itemsOf(assignmentId: number): Promise<AssignmentItemRecord[]> {

@@ -3,8 +3,7 @@
 import "server-only";
 import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db";
-import type { Assignment } from "@/models";
-import type { AssignmentRecord } from "./access";
+import { assignmentRecord, type AssignmentRecord } from "./access";
 import type { StudentExtension } from "./policy";
 import { percentOf, problemCredit, roundPoints, workedLate, workStatus, type WorkStatus } from "./student-status";
 import { partCountOf } from "./variants";
@@ -123,24 +122,6 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
     }
   }
   return result;
-}
-
-export function assignmentRecord(row: Assignment): AssignmentRecord {
-  return {
-    id: row.id,
-    classId: row.classId,
-    title: row.title,
-    instructions: row.instructions,
-    opensAt: row.opensAt,
-    dueAt: row.dueAt,
-    latePolicy: row.latePolicy,
-    lateUntil: row.lateUntil,
-    latePenaltyPercent: row.latePenaltyPercent,
-    attemptsAllowed: row.attemptsAllowed,
-    reveal: row.reveal,
-    status: row.status,
-    publishedAt: row.publishedAt,
-  };
 }
 
 /**

@@ -4,7 +4,8 @@ import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
 import { closesAt, effectiveDue } from "./policy";
-import { assignmentRecord, scoresOfStudent } from "./scores";
+import { assignmentRecord } from "./access";
+import { scoresOfStudent } from "./scores";
 import { workWindow, type WorkStatus, type WorkWindow } from "./student-status";
 
 export type StudentAssignmentRow = {

@@ -10,8 +10,10 @@ const limiters = {
   // The load benchmark raises it through the environment; nothing else should.
   answers: new RateLimiterMemory({ keyPrefix: "answers", points: Number(process.env.ANSWERS_PER_MINUTE) || 30, duration: 60 }),
   newProblem: new RateLimiterMemory({ keyPrefix: "new-problem", points: 60, duration: 60 }),
-  // Spent once per address and once per client: enough for a few tries, too few to flood an inbox.
+  // Per address: enough for a few tries, too few to flood an inbox.
   passwordReset: new RateLimiterMemory({ keyPrefix: "password-reset", points: 5, duration: 15 * 60 }),
+  // Per client: a shop class behind the school's one address may all forget at once; a script may not.
+  passwordResetClient: new RateLimiterMemory({ keyPrefix: "password-reset-client", points: 30, duration: 15 * 60 }),
   // Per signed-in student: a mistyped code or two is normal; a script walking the code space is not.
   joinClass: new RateLimiterMemory({ keyPrefix: "join-class", points: 10, duration: 15 * 60 }),
   // Per address: a classroom accepting on the school's one IP, not a script trying tokens.

@@ -6,7 +6,7 @@ import { handle, readJson } from "@/lib/auth/route";
 
 /** Public. Answers the same for every well-formed address, so it cannot be used to find accounts. */
 export const POST = handle(async (req) => {
-  await consume("passwordReset", `client:${clientAddress(req.headers)}`);
+  await consume("passwordResetClient", clientAddress(req.headers));
   const { email } = resetRequestSchema.parse(await readJson(req));
   await consume("passwordReset", `address:${email}`);
   await requestPasswordReset(email);

@@ -9,6 +9,10 @@ type Props = {
   confirmLabel: string;
   tone?: "primary" | "danger";
   busy?: boolean;
+  /** What the confirming button says while the action runs. */
+  busyLabel?: string;
+  /** Why the action failed; the dialog stays open so it can be tried again or cancelled. */
+  error?: string;
   onConfirm: () => void;
   onCancel: () => void;
 };
@@ -17,7 +21,7 @@ type Props = {
  * A modal question before anything that sends mail or cannot be undone. The native <dialog>
  * traps focus, closes on Escape and returns focus to the button that opened it.
  */
-export function ConfirmDialog({ open, title, children, confirmLabel, tone = "primary", busy = false, onConfirm, onCancel }: Props) {
+export function ConfirmDialog({ open, title, children, confirmLabel, tone = "primary", busy = false, busyLabel = "Working…", error, onConfirm, onCancel }: Props) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   useEffect(() => {
@@ -34,19 +38,24 @@ export function ConfirmDialog({ open, title, children, confirmLabel, tone = "pri
         e.preventDefault();
         if (!busy) onCancel();
       }}
-      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-lg border border-rule bg-paper-raised p-0 text-ink shadow-xl backdrop:bg-ink/40"
+      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-lg text-left font-normal border border-rule bg-paper-raised p-0 text-ink shadow-xl backdrop:bg-ink/40"
     >
       <div className="space-y-4 p-5">
         <h2 id={titleId} className="text-lg">
           {title}
         </h2>
         <div className="space-y-2 text-ink-soft">{children}</div>
+        {error ? (
+          <p role="alert" className="font-semibold text-danger">
+            {error}
+          </p>
+        ) : null}
         <div className="flex flex-wrap justify-end gap-3">
           <button type="button" className="btn-quiet" onClick={onCancel} disabled={busy}>
             Cancel
           </button>
           <button type="button" className={tone === "danger" ? "btn border-danger bg-danger text-white hover:opacity-90" : "btn-primary"} onClick={onConfirm} disabled={busy}>
-            {busy ? "Working…" : confirmLabel}
+            {busy ? busyLabel : confirmLabel}
           </button>
         </div>
       </div>
