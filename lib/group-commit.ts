@@ -79,8 +79,13 @@ class GroupCommit {
     this.connection ??= new Promise((resolve, reject) => {
       const db = new sqlite3.Database(path.resolve(this.file), (error) => {
         if (error) return reject(error);
-        db.serialize(() => CONNECTION_PRAGMAS.forEach((pragma) => db.run(pragma)));
-        db.run("SELECT 1", (e) => (e ? reject(e) : resolve(db)));
+        // Each pragma is awaited before the next and before the first write: the driver may run
+        // queued statements out of order, and foreign_keys set inside a transaction is silently ignored.
+        const pragmas = CONNECTION_PRAGMAS.reduce<Promise<void>>(
+          (previous, pragma) => previous.then(() => new Promise<void>((done, fail) => db.run(pragma, (e) => (e ? fail(e) : done())))),
+          Promise.resolve(),
+        );
+        pragmas.then(() => resolve(db), reject);
       });
     });
     return this.connection;
