@@ -79,6 +79,8 @@ test("a class from roster import to a graded assignment with a shop photo", asyn
   await expect(learner.getByLabel("Your name")).toHaveValue(student.name);
   await learner.getByLabel("Password").fill(PASSWORD);
   await learner.getByRole("button", { name: "Create account and join" }).click();
+  // The invitation page names the class too: wait until the student has landed in My classes.
+  await expect(learner).toHaveURL(/\/my-classes$/);
   await expect(learner.getByRole("heading", { name: className })).toBeVisible();
 
   // The instructor builds and publishes one problem of even spacing.
