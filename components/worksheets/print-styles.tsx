@@ -9,7 +9,9 @@ const PRINT_CSS = `
   .ws-page, .ws-page * { color: black !important; }
   .ws-page ~ .ws-page { break-before: page; }
   .ws-problem, .ws-key-problem { break-inside: avoid; }
-  .ws-figure svg { max-height: 1.3in; }
+  .ws-figure svg { max-height: 1.55in; }
+  .ws-figure .fill-chalk { fill: #9a9a9a !important; }
+  .ws-figure .stroke-chalk-dark { stroke: black !important; }
   .ws-answer-line { border-color: black !important; }
 }
 `;

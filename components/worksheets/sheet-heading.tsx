@@ -7,11 +7,11 @@ export function SheetHeading({ set, name, dueAt, kind }: { set: WorksheetSet; na
   const classLine = [schoolClass.name, schoolClass.sectionCode ? `Section ${schoolClass.sectionCode}` : null, schoolClass.term].filter(Boolean).join(" · ");
   return (
     <header className="space-y-2 border-b-2 border-ink pb-2">
-      <div className="flex flex-wrap items-baseline justify-between gap-x-4 text-sm">
-        <p>{schoolClass.program ? `${schoolClass.program} — ${classLine}` : classLine}</p>
-        <p className={kind === "key" ? "font-bold tracking-wide uppercase" : "text-ink-soft"}>{kind === "key" ? "Answer key — instructor's copy" : "Worksheet"}</p>
+      <p className="text-sm">{schoolClass.program ? `${schoolClass.program} — ${classLine}` : classLine}</p>
+      <div className="flex flex-wrap items-baseline justify-between gap-x-4">
+        <h2 className="text-xl leading-tight">{assignment.title}</h2>
+        <p className={`text-sm ${kind === "key" ? "font-bold tracking-wide uppercase" : "text-ink-soft"}`}>{kind === "key" ? "Answer key — instructor's copy" : "Worksheet"}</p>
       </div>
-      <h2 className="text-xl leading-tight">{assignment.title}</h2>
       <dl className="flex flex-wrap gap-x-8 gap-y-1 text-sm">
         <div className="flex gap-2">
           <dt className="text-ink-soft">Name</dt>
