@@ -1,3 +1,4 @@
+import { useId } from "react";
 import type { ProblemFigure } from "@/lib/problems/types";
 
 const TONES: Record<ProblemFigure["rects"][number]["tone"], string> = {
@@ -13,6 +14,8 @@ const TONES: Record<ProblemFigure["rects"][number]["tone"], string> = {
 
 /** The prompt's drawing, scaled to fit; dimension strings are drawn like the calculators'. */
 export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
+  // Several drawings share a page (a printed worksheet, a student's review), so each needs its own id.
+  const descriptionId = useId();
   const pad = Math.max(figure.width, figure.height) * 0.04 + 2;
   const font = Math.max(figure.width / 36, 2.2);
   const dimY = figure.dimensions.map((d) => d.y);
@@ -20,8 +23,8 @@ export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
   const bottom = Math.max(figure.height, ...dimY) + pad;
   const stroke = Math.max(figure.width / 600, 0.15);
   return (
-    <svg role="img" aria-labelledby="problem-figure-desc" viewBox={`${-pad} ${top} ${figure.width + 2 * pad} ${bottom - top}`} className="h-auto max-h-80 w-full" data-problem-figure>
-      <desc id="problem-figure-desc">{figure.description}</desc>
+    <svg role="img" aria-labelledby={descriptionId} viewBox={`${-pad} ${top} ${figure.width + 2 * pad} ${bottom - top}`} className="h-auto max-h-80 w-full" data-problem-figure>
+      <desc id={descriptionId}>{figure.description}</desc>
       {figure.rects.map((r, i) => (
         <g key={i}>
           <rect x={r.x} y={r.y} width={Math.max(r.w, stroke)} height={Math.max(r.h, stroke)} strokeWidth={stroke} className={TONES[r.tone]} />

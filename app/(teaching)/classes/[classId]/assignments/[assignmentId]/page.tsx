@@ -50,11 +50,18 @@ export default async function AssignmentOverviewPage({ params, searchParams }: P
           <h2 id="settings-heading" className="text-xl">
             Settings
           </h2>
-          {a.locked ? (
-            <Link href={`/classes/${a.classId}/assignments/${a.id}/students`} className="btn-quiet" data-chrome>
-              Student work →
-            </Link>
-          ) : null}
+          <div className="flex flex-wrap gap-2" data-chrome>
+            {a.status === "published" ? (
+              <Link href={`/classes/${a.classId}/assignments/${a.id}/worksheets`} className="btn-quiet">
+                Print worksheets
+              </Link>
+            ) : null}
+            {a.locked ? (
+              <Link href={`/classes/${a.classId}/assignments/${a.id}/students`} className="btn-quiet">
+                Student work →
+              </Link>
+            ) : null}
+          </div>
         </div>
         <dl className="card grid gap-x-6 gap-y-3 p-4 sm:grid-cols-2 lg:grid-cols-3">
           <div>
