@@ -9,7 +9,8 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" },
+        // The exact cut-list search and the image pipeline take seconds on a loaded machine; 5 s is too tight there.
+        test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node", testTimeout: 20_000 },
       },
       {
         resolve: { alias },
