@@ -58,9 +58,9 @@ export function RowChart({ id, data, category, series, max }: { id: string; data
         <Patterns id={id} />
         <CartesianGrid stroke={RULE} horizontal={false} />
         <XAxis type="number" allowDecimals={false} tick={tick} domain={[0, max ?? "auto"]} />
-        <YAxis type="category" dataKey={category} tick={tick} width={110} interval={0} />
+        <YAxis type="category" dataKey={category} tick={tick} width={132} interval={0} />
         <Tooltip cursor={{ fill: "#ece7da" }} />
-        {series.length > 1 ? <Legend wrapperStyle={{ fontSize: 12 }} /> : null}
+        {series.length > 1 ? <Legend wrapperStyle={{ fontSize: 12 }} formatter={(value: string) => <span style={{ color: INK }}>{value}</span>} /> : null}
         {series.map((s, i) => (
           <Bar key={s.key} dataKey={s.key} name={s.label} fill={fillOf(id, i)} stroke={i === 0 ? undefined : "#1d1b18"} strokeWidth={i === 0 ? 0 : 0.5} isAnimationActive={false}>
             <LabelList dataKey={s.key} position="right" fill={INK} fontSize={11} />

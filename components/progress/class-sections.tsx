@@ -95,7 +95,7 @@ export function MasteryPanel({ skills, students }: { skills: SkillProgress[]; st
       id="mastery"
       heading="Mastery by skill"
       summary={masterySummary(
-        skills.map((s) => ({ title: s.title, mastered: s.mastered })),
+        skills.map((s) => ({ title: s.title, mastered: s.mastered, levelOne: s.levels[0].mastered })),
         students,
       )}
       empty={students === 0}

@@ -9,10 +9,11 @@ import { RowChart } from "./lazy-charts";
 
 export function MyClassPanel({ scores }: { scores: MyClassScores }) {
   const id = `class-${scores.id}`;
+  const best = [...scores.assignments].sort((a, b) => b.percent - a.percent)[0];
   const summary =
     scores.assignments.length === 0
       ? `${scores.name}: no published assignments yet.`
-      : `${scores.name}: your average is ${scores.average} % over ${scores.assignments.length} assignment${scores.assignments.length === 1 ? "" : "s"}. Best: ${[...scores.assignments].sort((a, b) => b.percent - a.percent)[0].title}.`;
+      : `${scores.name}: your average is ${scores.average} % over ${scores.assignments.length} assignment${scores.assignments.length === 1 ? "" : "s"}.${best && best.percent > 0 ? ` Best: ${best.title}, ${best.percent} %.` : ""}`;
   return (
     <ChartPanel
       id={id}
@@ -55,7 +56,7 @@ export function MyMasteryPanel({ mastery }: { mastery: SkillMastery[] }) {
   return (
     <ChartPanel
       id="my-mastery"
-      heading="Skills"
+      heading="Levels mastered per skill"
       summary={summary}
       empty={started.length === 0}
       chart={
@@ -93,7 +94,7 @@ export function MySlipsList({ slips }: { slips: MySlip[] }) {
           </p>
           <p>{s.feedback}</p>
           <p className="text-ink-soft">
-            In {s.kinds.join(", ")} · last on <LocalTime iso={s.lastAt} style="date" />
+            In problems: {s.kinds.join(", ")} · last on <LocalTime iso={s.lastAt} style="date" />
           </p>
           {s.lessonHref ? (
             <Link href={s.lessonHref} className="font-semibold">

@@ -59,16 +59,19 @@ export function slipSummary(slips: readonly SlipCount[]): string {
   return second ? `${lead} Next: ${second.name.toLowerCase()}, ${plural(second.count, "time")}.` : lead;
 }
 
-export type SkillCount = { title: string; mastered: number };
+export type SkillCount = { title: string; mastered: number; levelOne: number };
 
+/** Whole skills first; while nobody has a whole skill, the first level shows where the class is moving. */
 export function masterySummary(skills: readonly SkillCount[], students: number): string {
   if (students === 0) return "No students in the class yet.";
   if (skills.length === 0) return "No skills to show.";
-  const sorted = [...skills].sort((a, b) => b.mastered - a.mastered);
-  const best = sorted[0];
-  const worst = sorted[sorted.length - 1];
-  if (best.mastered === 0) return `No student has mastered a skill yet (of ${plural(students, "student")}).`;
-  return `${best.title}: ${best.mastered} of ${students} students have mastered it, the most of any skill. Fewest: ${worst.title}, ${worst.mastered} of ${students}.`;
+  const byWhole = [...skills].sort((a, b) => b.mastered - a.mastered);
+  const best = byWhole[0];
+  const worst = byWhole[byWhole.length - 1];
+  if (best.mastered > 0) return `${best.title}: ${best.mastered} of ${students} students have mastered all three levels, the most of any skill. Fewest: ${worst.title}, ${worst.mastered} of ${students}.`;
+  const started = [...skills].sort((a, b) => b.levelOne - a.levelOne)[0];
+  if (started.levelOne === 0) return `No student has mastered a level yet (of ${plural(students, "student")}).`;
+  return `No student has mastered a whole skill yet. Furthest along: ${started.title}, where ${started.levelOne} of ${students} students have mastered level 1.`;
 }
 
 export type LessonCount = { title: string; read: number; practised: number };

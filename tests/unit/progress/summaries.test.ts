@@ -67,18 +67,27 @@ describe("summaries for screen readers", () => {
     expect(distributionSummary("Battens", [])).toBe("Battens: no students to score yet.");
   });
 
-  it("says which skill most and fewest students have mastered", () => {
+  it("says which skill most and fewest students have mastered, or how far the first level has come", () => {
     expect(
       masterySummary(
         [
-          { title: "Even spacing", mastered: 3 },
-          { title: "Stairs", mastered: 0 },
-          { title: "Reading a tape", mastered: 5 },
+          { title: "Even spacing", mastered: 3, levelOne: 6 },
+          { title: "Stairs", mastered: 0, levelOne: 1 },
+          { title: "Reading a tape", mastered: 5, levelOne: 5 },
         ],
         8,
       ),
-    ).toBe("Reading a tape: 5 of 8 students have mastered it, the most of any skill. Fewest: Stairs, 0 of 8.");
-    expect(masterySummary([{ title: "Stairs", mastered: 0 }], 8)).toMatch(/No student has mastered a skill yet/);
+    ).toBe("Reading a tape: 5 of 8 students have mastered all three levels, the most of any skill. Fewest: Stairs, 0 of 8.");
+    expect(
+      masterySummary(
+        [
+          { title: "Stairs", mastered: 0, levelOne: 1 },
+          { title: "Even spacing", mastered: 0, levelOne: 5 },
+        ],
+        18,
+      ),
+    ).toBe("No student has mastered a whole skill yet. Furthest along: Even spacing, where 5 of 18 students have mastered level 1.");
+    expect(masterySummary([{ title: "Stairs", mastered: 0, levelOne: 0 }], 8)).toBe("No student has mastered a level yet (of 8 students).");
     expect(masterySummary([], 0)).toBe("No students in the class yet.");
   });
 
