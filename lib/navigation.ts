@@ -9,8 +9,10 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/calculators", label: "Calculators" },
   { href: "/practice", label: "Practice" },
   { href: "/my-classes", label: "My classes", roles: ["student"] },
+  { href: "/my-progress", label: "My progress", roles: ["student"] },
   { href: "/classes", label: "Classes", roles: ["instructor", "admin"] },
   { href: "/admin/users", label: "Users", roles: ["admin"] },
+  { href: "/admin/classes", label: "All classes", roles: ["admin"] },
 ];
 
 export function navFor(role: Role | null): NavItem[] {

@@ -46,7 +46,7 @@ test("an admin signs in and sees every class and the users list", async ({ page 
   await main(page).getByRole("link", { name: "Users" }).click();
   await expect(page.getByRole("heading", { name: "Users" })).toBeVisible();
   await expect(page.getByRole("table")).toContainText(dana.email);
-  await main(page).getByRole("link", { name: "Classes" }).click();
+  await main(page).getByRole("link", { name: "Classes", exact: true }).click();
   await expect(page.getByRole("heading", { name: "Every class" })).toBeVisible();
 });
 

@@ -29,9 +29,9 @@ describe("decideAccess", () => {
 describe("navigation", () => {
   it("shows each role only its own areas", () => {
     expect(navFor(null).map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice"]);
-    expect(navFor("student").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "My classes"]);
+    expect(navFor("student").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "My classes", "My progress"]);
     expect(navFor("instructor").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "Classes"]);
-    expect(navFor("admin").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "Classes", "Users"]);
+    expect(navFor("admin").map((i) => i.label)).toEqual(["Lessons", "Calculators", "Practice", "Classes", "Users", "All classes"]);
   });
 
   it.each([

@@ -52,11 +52,16 @@ export default async function RosterPage({ params, searchParams }: PageProps<"/c
             <h2 id="assignments-heading" className="text-lg">
               Assignments
             </h2>
-            <p className="text-sm text-ink-soft">Build, publish and follow the class&apos;s layout work.</p>
+            <p className="text-sm text-ink-soft">Build, publish and follow the class&apos;s layout work, and see where the class stands.</p>
           </div>
-          <Link href={`${base}/assignments`} className="btn-primary">
-            Assignments
-          </Link>
+          <div className="flex flex-wrap gap-2">
+            <Link href={`${base}/progress`} className="btn-quiet">
+              Progress
+            </Link>
+            <Link href={`${base}/assignments`} className="btn-primary">
+              Assignments
+            </Link>
+          </div>
         </section>
       </div>
 
