@@ -157,8 +157,9 @@ export async function seedDemoHistory(database: Database, classId: number, stude
     const items = await models.AssignmentItem.findAll({ where: { assignmentId: a.id }, order: [["position", "ASC"]] });
     assignments.push({ id: a.id, opensAt: a.opensAt, dueAt: a.dueAt, latePolicy: a.latePolicy, lateUntil: a.lateUntil, latePenaltyPercent: a.latePenaltyPercent, attemptsAllowed: a.attemptsAllowed, items: items.map((i) => ({ id: i.id, kind: i.kind, level: i.level, problemCount: i.problemCount })) });
   }
-  // Variant seeds are keyed like the app's; the stored seed is what counts, so any key works here.
-  const secret = process.env.NEXTAUTH_SECRET ?? "sixteenths demo history";
+  // Variant seeds are made like the app's, but under a fixed key: the stored seed is what the app
+  // reads, and a fixed key gives every fresh demo the same history.
+  const secret = "sixteenths demo history";
   // Photos live beside the database (lib/uploads/files.ts), here the file being seeded rather than the app's.
   const { storage } = (sequelize as unknown as { options: { storage: string } }).options;
   const uploadsFolder = path.join(path.dirname(path.resolve(storage)), "uploads");
