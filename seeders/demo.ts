@@ -186,5 +186,6 @@ export async function seedDemo({ sequelize, models }: Database, cost: number): P
   return [
     ...DEMO_STAFF.map(({ email, role, note }) => ({ email, role, note })),
     { email: DEMO_STUDENTS[0].email, role: "student" as const, note: `student, CARP 110 (and ${DEMO_STUDENTS.length - 1} more like it)` },
+    { email: DEMO_STUDENTS[3].email, role: "student" as const, note: "student, CARP 110, with a graded past (keeps dividing by members)" },
   ];
 }
