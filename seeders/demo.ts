@@ -55,14 +55,15 @@ export const DEMO_INVITED = [
 const DAY = 24 * 60 * 60 * 1000;
 
 /**
- * CARP 110's assignments, dated from the day the demo is first seeded so there is always one past
- * due, one due soon and one later. Kinds and levels follow the course order.
+ * CARP 110's assignments, dated from the day the demo is first seeded so there are two past due
+ * (the first course weeks' tape and fractions, then even spacing), one due soon and one later.
+ * Kinds and levels follow the course order; the list keeps its order for the code that indexes it.
  */
 export const DEMO_ASSIGNMENTS = [
   {
     title: "Even spacing on the hallway wall",
     instructions: "Work each layout on paper first: subtract the members, divide by the **spaces**, round once to 1/16\".\n\nShow the marks from the left end.",
-    opensIn: -14, dueIn: -3, latePolicy: "penalty" as const, latePenaltyPercent: 10, lateUntilIn: null, reveal: "when-final" as const, status: "published" as const,
+    opensIn: -17, dueIn: -7, latePolicy: "penalty" as const, latePenaltyPercent: 10, lateUntilIn: null, reveal: "when-final" as const, status: "published" as const,
     items: [
       { kind: "even-gap", level: 2, problemCount: 3, points: 4 },
       { kind: "mark-position", level: 2, problemCount: 2, points: 4 },
@@ -95,6 +96,15 @@ export const DEMO_ASSIGNMENTS = [
       { kind: "stair-risers", level: 2, problemCount: 2, points: 5 },
     ],
   },
+  {
+    title: "Reading the tape and fractions",
+    instructions: "Read each mark to the nearest 1/16\". Add and subtract on paper, then reduce the fraction before you write it down.",
+    opensIn: -35, dueIn: -21, latePolicy: "none" as const, latePenaltyPercent: null, lateUntilIn: null, reveal: "when-final" as const, status: "published" as const,
+    items: [
+      { kind: "tape-reading", level: 2, problemCount: 3, points: 3 },
+      { kind: "fraction-arithmetic", level: 1, problemCount: 3, points: 3 },
+    ],
+  },
 ];
 
 export type DemoLogin = { email: string; role: Role; note: string };
@@ -102,9 +112,10 @@ export type DemoLogin = { email: string; role: Role; note: string };
 /** Idempotent: finds before it creates, so a second run changes nothing. */
 export async function seedDemo({ sequelize, models }: Database, cost: number): Promise<DemoLogin[]> {
   const { User, SchoolClass, Enrollment, ClassInstructor, Invitation, Assignment, AssignmentItem } = models;
+  const started = performance.now();
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, cost);
 
-  await sequelize.transaction(async (transaction) => {
+  const classId = await sequelize.transaction(async (transaction) => {
     const ensureUser = async (name: string, email: string, role: Role) => {
       const [user] = await User.findOrCreate({ where: { email }, defaults: { name, email, role, passwordHash }, transaction });
       return user;
@@ -162,10 +173,20 @@ export async function seedDemo({ sequelize, models }: Database, cost: number): P
         { transaction },
       );
     }
+    return carp110.id;
   });
+
+  // Loaded only when seeding: the history pulls in the grader, every problem kind and sharp.
+  const { seedDemoHistory } = await import("./demo-history");
+  const history = await seedDemoHistory({ sequelize, models }, classId, DEMO_STUDENTS.map((s) => s.email), Date.now());
+  if (history) {
+    const seconds = ((performance.now() - started) / 1000).toFixed(1);
+    console.log(`Demo class history: ${history.tries} tries on ${history.problems} problems, ${history.lessons} lessons read, ${history.photos} shop photos (demo seeded in ${seconds} s).`);
+  }
 
   return [
     ...DEMO_STAFF.map(({ email, role, note }) => ({ email, role, note })),
     { email: DEMO_STUDENTS[0].email, role: "student" as const, note: `student, CARP 110 (and ${DEMO_STUDENTS.length - 1} more like it)` },
+    { email: DEMO_STUDENTS[3].email, role: "student" as const, note: "student, CARP 110, with a graded past (keeps dividing by members)" },
   ];
 }
