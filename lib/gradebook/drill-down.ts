@@ -5,21 +5,13 @@ import "server-only";
 import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db";
 import type { SessionUser } from "@/lib/auth/roles";
-import { studentReview, type StudentReview } from "@/lib/assignments/student-review";
+import { studentReview } from "@/lib/assignments/student-review";
 import { listUploads } from "@/lib/uploads/store";
-import type { UploadView } from "@/lib/uploads/limits";
 import { classAssignment } from "./override";
 import { overrideHistory, overridesInForce } from "./overrides";
-import type { OverrideEntry, OverrideNotice } from "./types";
+import type { DrillDownView } from "./types";
 
-export type DrillDown = {
-  review: StudentReview;
-  /** Seconds each try took, by `${problemId}:${tryNumber}`, where the browser measured it. */
-  secondsPerTry: Record<string, number>;
-  photos: UploadView[];
-  history: OverrideEntry[];
-  inForce: OverrideNotice | null;
-};
+export type DrillDown = DrillDownView;
 
 export async function drillDown(user: SessionUser, classId: number, assignmentId: number, studentId: number): Promise<DrillDown> {
   const assignment = await classAssignment(user, classId, assignmentId);

@@ -1,5 +1,7 @@
 // The gradebook's plain data, shared by lib/, the route handlers and the client table.
+import type { StudentReview } from "@/lib/assignments/student-review";
 import type { WorkStatus } from "@/lib/assignments/student-status";
+import type { UploadView } from "@/lib/uploads/limits";
 
 export type CellStatus = WorkStatus | "excused";
 
@@ -39,3 +41,13 @@ export type OverrideEntry = {
 
 /** What a student is told about an override in force. */
 export type OverrideNotice = { earned: number | null; excused: boolean; reason: string; at: string };
+
+/** The drill-down as the browser receives it (lib/gradebook/drill-down.ts builds it). */
+export type DrillDownView = {
+  review: StudentReview;
+  /** Seconds each try took, by `${problemId}:${tryNumber}`, where the browser measured it. */
+  secondsPerTry: Record<string, number>;
+  photos: UploadView[];
+  history: OverrideEntry[];
+  inForce: OverrideNotice | null;
+};
