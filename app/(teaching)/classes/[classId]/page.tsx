@@ -54,9 +54,14 @@ export default async function RosterPage({ params, searchParams }: PageProps<"/c
             </h2>
             <p className="text-sm text-ink-soft">Build, publish and follow the class&apos;s layout work.</p>
           </div>
-          <Link href={`${base}/assignments`} className="btn-primary">
-            Assignments
-          </Link>
+          <div className="flex flex-wrap gap-2">
+            <Link href={`${base}/gradebook`} className="btn-quiet">
+              Gradebook
+            </Link>
+            <Link href={`${base}/assignments`} className="btn-primary">
+              Assignments
+            </Link>
+          </div>
         </section>
       </div>
 
