@@ -94,7 +94,8 @@ export function GradeTable({ classId, assignments, students, onOpen }: Props) {
                     </button>
                     {assignment ? (
                       <span className="block text-xs font-normal text-ink-faint">
-                        due {shortDate(assignment.dueAt)} · {assignment.possible} pts · avg {assignment.average === null ? "—" : `${assignment.average}%`}
+                        due {shortDate(assignment.dueAt)} · {assignment.possible} pts
+                        <span className="block whitespace-nowrap">class avg {assignment.average === null ? "—" : `${assignment.average}%`}</span>
                       </span>
                     ) : null}
                   </th>

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { ClassHeader } from "@/components/classes/class-header";
+import Link from "next/link";
 import { GradebookClient } from "@/components/gradebook/gradebook-client";
 import { requireRole } from "@/lib/auth/session";
 import { classForTeacher } from "@/lib/classes/queries";
@@ -16,7 +16,15 @@ export default async function GradebookPage({ params }: PageProps<"/classes/[cla
     <div className="space-y-6">
       {/* A wide grid reads best across the page. */}
       <style>{"@media print { @page { size: landscape; margin: 10mm; } }"}</style>
-      <ClassHeader summary={summary} current="roster" title="Gradebook" />
+      <nav aria-label="Breadcrumb" className="text-sm" data-chrome>
+        <Link href="/classes">Classes</Link> <span aria-hidden="true">/</span> <Link href={`/classes/${classId}`}>{summary.name}</Link> <span aria-hidden="true">/</span> <span>Gradebook</span>
+      </nav>
+      <header className="space-y-1">
+        <h1 className="text-2xl">Gradebook</h1>
+        <p className="text-ink-soft">
+          {summary.name} · {summary.term} · {data.students.length} active student{data.students.length === 1 ? "" : "s"} · {data.assignments.length} published assignment{data.assignments.length === 1 ? "" : "s"}
+        </p>
+      </header>
       <GradebookClient initial={data} />
     </div>
   );
