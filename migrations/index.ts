@@ -4,6 +4,7 @@ import * as lessonProgress from "./20261202-0003-lesson-progress";
 import * as practice from "./20261202-0004-practice";
 import * as classesAssignmentsMail from "./20261203-0005-classes-assignments-mail";
 import * as problemPartCount from "./20261203-0009-problem-part-count";
+import * as scoreOverrides from "./20261204-0010-score-overrides";
 
 // Listed by hand, in order, so the same list runs under tsx, vitest and Next without a file glob.
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   { name: "20261202-0004-practice", ...practice },
   { name: "20261203-0005-classes-assignments-mail", ...classesAssignmentsMail },
   { name: "20261203-0009-problem-part-count", ...problemPartCount },
+  { name: "20261204-0010-score-overrides", ...scoreOverrides },
 ];

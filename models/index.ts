@@ -12,10 +12,11 @@ import { PasswordReset } from "./password-reset";
 import { PracticeProblem } from "./practice-problem";
 import { SavedLayout } from "./saved-layout";
 import { SchoolClass } from "./school-class";
+import { ScoreOverride } from "./score-override";
 import { Upload } from "./upload";
 import { User } from "./user";
 
-export { Assignment, AssignmentExtension, AssignmentItem, Attempt, ClassInstructor, EmailOutbox, Enrollment, Invitation, LessonProgress, PasswordReset, PracticeProblem, SavedLayout, SchoolClass, Upload, User };
+export { Assignment, AssignmentExtension, AssignmentItem, Attempt, ClassInstructor, EmailOutbox, Enrollment, Invitation, LessonProgress, PasswordReset, PracticeProblem, SavedLayout, SchoolClass, ScoreOverride, Upload, User };
 export type { Role } from "./user";
 export { ROLES } from "./user";
 
@@ -35,6 +36,7 @@ export type Models = {
   AssignmentItem: typeof AssignmentItem;
   AssignmentExtension: typeof AssignmentExtension;
   Upload: typeof Upload;
+  ScoreOverride: typeof ScoreOverride;
 };
 
 let initialisedFor: Sequelize | undefined;
@@ -57,6 +59,7 @@ export function initModels(sequelize: Sequelize): Models {
     AssignmentItem.initModel(sequelize);
     AssignmentExtension.initModel(sequelize);
     Upload.initModel(sequelize);
+    ScoreOverride.initModel(sequelize);
 
     SchoolClass.belongsTo(User, { as: "instructor", foreignKey: "instructorId" });
     User.hasMany(SchoolClass, { as: "taughtClasses", foreignKey: "instructorId" });
@@ -92,7 +95,10 @@ export function initModels(sequelize: Sequelize): Models {
     Upload.belongsTo(Assignment, { as: "assignment", foreignKey: "assignmentId" });
     Upload.belongsTo(User, { as: "student", foreignKey: "studentId" });
     Upload.belongsTo(User, { as: "commenter", foreignKey: "commentBy" });
+    ScoreOverride.belongsTo(Assignment, { as: "assignment", foreignKey: "assignmentId" });
+    ScoreOverride.belongsTo(User, { as: "student", foreignKey: "studentId" });
+    ScoreOverride.belongsTo(User, { as: "author", foreignKey: "createdBy" });
     initialisedFor = sequelize;
   }
-  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout, LessonProgress, PracticeProblem, Attempt, Invitation, PasswordReset, EmailOutbox, Assignment, AssignmentItem, AssignmentExtension, Upload };
+  return { User, SchoolClass, Enrollment, ClassInstructor, SavedLayout, LessonProgress, PracticeProblem, Attempt, Invitation, PasswordReset, EmailOutbox, Assignment, AssignmentItem, AssignmentExtension, Upload, ScoreOverride };
 }

@@ -44,7 +44,13 @@ export function WorkClient({ initial }: { initial: StudentAssignmentView }) {
           <div>
             <dt className="text-ink-faint">Score so far</dt>
             <dd className="measure text-lg font-semibold" data-score>
-              {score.earned} / {score.possible} <span className="text-sm font-normal text-ink-soft">({score.percent}%)</span>
+              {score.override?.excused ? (
+                "Excused"
+              ) : (
+                <>
+                  {score.earned} / {score.possible} <span className="text-sm font-normal text-ink-soft">({score.percent}%)</span>
+                </>
+              )}
             </dd>
           </div>
           <div className="col-span-2 sm:col-span-1">
@@ -55,6 +61,11 @@ export function WorkClient({ initial }: { initial: StudentAssignmentView }) {
         <div className="h-2 overflow-hidden rounded-full bg-paper-sunk" role="progressbar" aria-label="Problems finished" aria-valuemin={0} aria-valuemax={progress.total} aria-valuenow={progress.finished}>
           <div className="h-full bg-chalk" style={{ width: `${share}%` }} />
         </div>
+        {score.override ? (
+          <p className="rounded-sm border border-rule-strong bg-paper-raised p-2 text-sm" data-override>
+            <strong>{score.override.excused ? "Excused by your instructor." : "Score changed by your instructor."}</strong> Reason: “{score.override.reason}”
+          </p>
+        ) : null}
         {error ? <p className="text-sm text-danger">{error.message} Your answers are saved; reload the page to see the totals.</p> : null}
       </section>
 

@@ -6,6 +6,9 @@ import type { SessionUser } from "@/lib/auth/roles";
 import { closesAt, effectiveDue } from "./policy";
 import { assignmentRecord } from "./access";
 import { scoresOfStudent } from "./scores";
+import { overridesInForce } from "@/lib/gradebook/overrides";
+import type { OverrideNotice } from "@/lib/gradebook/types";
+import { percentOf } from "./student-status";
 import { workWindow, type WorkStatus, type WorkWindow } from "./student-status";
 
 export type StudentAssignmentRow = {
@@ -24,6 +27,8 @@ export type StudentAssignmentRow = {
   percent: number;
   finished: number;
   total: number;
+  /** Set when the instructor changed or excused this score by hand. */
+  override: OverrideNotice | null;
 };
 
 export type StudentClassView = { id: number; name: string; term: string; instructorName: string; assignments: StudentAssignmentRow[] };
@@ -35,9 +40,10 @@ export async function studentClass(user: SessionUser, classId: number): Promise<
   const row = enrolled ? await SchoolClass.findByPk(classId, { include: [{ model: User, as: "instructor", attributes: ["name"] }] }) : null;
   if (!row || row.archivedAt) throw new AppError("not_found", "There is no such class in your classes.");
   const assignments = (await Assignment.findAll({ where: { classId, status: "published" }, order: [["dueAt", "ASC"], ["id", "ASC"]] })).map(assignmentRecord);
-  const [scores, extensions] = await Promise.all([
+  const [scores, extensions, overrides] = await Promise.all([
     scoresOfStudent(assignments, user.id),
     AssignmentExtension.findAll({ where: { assignmentId: assignments.map((a) => a.id), studentId: user.id } }),
+    overridesInForce(assignments.map((a) => a.id), user.id),
   ]);
   const now = new Date();
   return {
@@ -50,6 +56,8 @@ export async function studentClass(user: SessionUser, classId: number): Promise<
       const extension = ext ? { dueAt: ext.dueAt, extraAttempts: ext.extraAttempts } : null;
       const due = effectiveDue(a, extension);
       const score = scores.get(a.id);
+      const override = overrides.get(`${a.id}:${user.id}`) ?? null;
+      const earned = override ? (override.earned ?? 0) : (score?.earned ?? 0);
       return {
         id: a.id,
         title: a.title,
@@ -60,11 +68,12 @@ export async function studentClass(user: SessionUser, classId: number): Promise<
         window: workWindow(now, a.opensAt, a, extension),
         status: score?.status ?? "not-started",
         late: score?.late ?? false,
-        earned: score?.earned ?? 0,
+        earned,
         possible: score?.possible ?? 0,
-        percent: score?.percent ?? 0,
+        percent: percentOf(earned, score?.possible ?? 0),
         finished: score?.finished ?? 0,
         total: score?.total ?? 0,
+        override,
       };
     }),
   };

@@ -16,6 +16,8 @@ import { assignmentForStudent, itemsOf, type AssignmentItemRecord, type Assignme
 import { acceptsWork, closesAt, effectiveDue, isLate, type StudentExtension } from "./policy";
 import { latePolicyText, mayReveal, percentOf, problemCredit, roundPoints, workedLate, workStatus, workWindow, type WorkStatus, type WorkWindow } from "./student-status";
 import { ensureVariants } from "./variants";
+import { overridesInForce } from "@/lib/gradebook/overrides";
+import type { OverrideNotice } from "@/lib/gradebook/types";
 
 export type TryView = { number: number; at: string; late: boolean; answers: { part: string; label: string; raw: string; verdict: Verdict; slip: string | null }[] };
 
@@ -40,7 +42,8 @@ export type StudentAssignmentView = {
   status: WorkStatus;
   late: boolean;
   progress: { finished: number; total: number };
-  score: { earned: number; possible: number; percent: number };
+  /** The score in force; `override` says when the instructor set it by hand, and why. */
+  score: { earned: number; possible: number; percent: number; override: OverrideNotice | null };
   problems: AssignmentProblemView[];
 };
 
@@ -151,6 +154,8 @@ export async function studentAssignment(user: SessionUser, assignmentId: number,
   const earned = roundPoints(problems.reduce((sum, p) => sum + p.earned, 0));
   const possible = items.reduce((sum, i) => sum + i.points * i.problemCount, 0);
   const due = effectiveDue(assignment, extension);
+  const override = (await overridesInForce([assignment.id], user.id)).get(`${assignment.id}:${user.id}`) ?? null;
+  const inForce = override ? (override.earned ?? 0) : earned;
   return {
     assignment: {
       id: assignment.id,
@@ -175,7 +180,7 @@ export async function studentAssignment(user: SessionUser, assignmentId: number,
     status: workStatus({ tries: new Set(variants.flatMap((v) => v.attempts.map((a) => `${v.problem.id}:${a.submission}`))).size, lastTryAt, finished, total }, now, assignment, extension),
     late: workedLate(lastTryAt, assignment, extension),
     progress: { finished, total },
-    score: { earned, possible, percent: percentOf(earned, possible) },
+    score: { earned: inForce, possible, percent: percentOf(inForce, possible), override },
     problems,
   };
 }

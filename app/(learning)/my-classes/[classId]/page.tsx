@@ -75,9 +75,14 @@ export default async function StudentClassPage({ params }: PageProps<"/my-classe
                   <div className="flex gap-1">
                     <dt className="text-ink-faint">Score</dt>
                     <dd className="measure font-semibold" data-score>
-                      {a.earned} / {a.possible} ({a.percent}%)
+                      {a.override?.excused ? "Excused" : `${a.earned} / ${a.possible} (${a.percent}%)`}
                     </dd>
                   </div>
+                  {a.override ? (
+                    <p className="w-full text-ink-soft" data-override>
+                      {a.override.excused ? "Excused" : "Score changed"} by your instructor: “{a.override.reason}”
+                    </p>
+                  ) : null}
                   <div className="flex gap-1">
                     <dt className="text-ink-faint">Finished</dt>
                     <dd className="measure font-semibold">

@@ -55,6 +55,9 @@ export default async function RosterPage({ params, searchParams }: PageProps<"/c
             <p className="text-sm text-ink-soft">Build, publish and follow the class&apos;s layout work, and see where the class stands.</p>
           </div>
           <div className="flex flex-wrap gap-2">
+            <Link href={`${base}/gradebook`} className="btn-quiet">
+              Gradebook
+            </Link>
             <Link href={`${base}/progress`} className="btn-quiet">
               Progress
             </Link>
