@@ -22,7 +22,7 @@ export async function requestPasswordReset(email: string, now = new Date()): Pro
   const user = await User.findOne({ attributes: ["id", "email", "name"], where: { email } });
   if (!user) return;
   const token = randomBytes(32).toString("base64url");
-  await db().sequelize.transaction(async (transaction) => {
+  await db().sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     await PasswordReset.create({ userId: user.id, tokenHash: hashResetToken(token), expiresAt: new Date(now.getTime() + LIFETIME_MS) }, { transaction });
     await enqueueMail([passwordResetMail({ to: user.email, name: user.name, token })], transaction);
   });

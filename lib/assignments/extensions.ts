@@ -1,5 +1,5 @@
 import "server-only";
-import { literal, Op, type Transaction } from "sequelize";
+import { literal, Op, Transaction } from "sequelize";
 import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/roles";
@@ -68,7 +68,7 @@ export async function grantExtension(user: SessionUser, assignmentId: number, da
   if (data.dueAt && Date.parse(data.dueAt) <= assignment.opensAt.getTime()) {
     throw new AppError("bad_request", "The new due date must come after the assignment opens.", { dueAt: "The new due date must come after the assignment opens." });
   }
-  await sequelize.transaction(async (transaction) => {
+  await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const existing = await models.AssignmentExtension.findOne({ where: { assignmentId, studentId: data.studentId }, transaction });
     const values = { dueAt: data.dueAt ? new Date(data.dueAt) : null, extraAttempts: data.extraAttempts, note: data.note || null, grantedBy: user.id };
     await shiftOpenTries(assignmentId, data.studentId, data.extraAttempts - (existing?.extraAttempts ?? 0), transaction);
@@ -82,7 +82,7 @@ export async function grantExtension(user: SessionUser, assignmentId: number, da
 export async function removeExtension(user: SessionUser, assignmentId: number, studentId: number): Promise<void> {
   await assignmentForTeacher(user, assignmentId);
   const { sequelize, models } = db();
-  await sequelize.transaction(async (transaction) => {
+  await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const existing = await models.AssignmentExtension.findOne({ where: { assignmentId, studentId }, transaction });
     if (!existing) throw new AppError("not_found", "That student has no extension on this assignment.");
     await shiftOpenTries(assignmentId, studentId, -existing.extraAttempts, transaction);

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Transaction } from "sequelize";
+import { Transaction } from "sequelize";
 import { db } from "@/lib/db";
 import { env } from "@/lib/env";
 import { AppError, type FieldErrors } from "@/lib/errors";
@@ -53,7 +53,7 @@ export async function createAssignment(user: SessionUser, classId: number, data:
   await classForTeacher(user, classId);
   checkKinds(data.items);
   const { sequelize, models } = db();
-  const id = await sequelize.transaction(async (transaction) => {
+  const id = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const row = await models.Assignment.create({ ...columnsOf(data), classId, attemptsAllowed: data.attemptsAllowed, status: "draft", createdBy: user.id }, { transaction });
     await writeItems(row.id, data.items, transaction);
     return row.id;
@@ -80,7 +80,7 @@ export async function updateAssignment(user: SessionUser, assignmentId: number, 
   await assignmentForTeacher(user, assignmentId);
   checkKinds(data.items);
   const { sequelize, models } = db();
-  await sequelize.transaction(async (transaction) => {
+  await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const row = await models.Assignment.findByPk(assignmentId, { transaction });
     if (!row) throw new AppError("not_found", "There is no such assignment.");
     if (row.publishedAt) {
@@ -105,7 +105,7 @@ export type PublishResult = { assignment: TeacherAssignment; emailed: number };
 export async function publishAssignment(user: SessionUser, assignmentId: number, now = new Date()): Promise<PublishResult> {
   await assignmentForTeacher(user, assignmentId);
   const { sequelize, models } = db();
-  const emailed = await sequelize.transaction(async (transaction) => {
+  const emailed = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const row = await models.Assignment.findByPk(assignmentId, { transaction });
     if (!row) throw new AppError("not_found", "There is no such assignment.");
     if (row.status === "published") return 0;
@@ -152,7 +152,7 @@ export async function duplicateAssignment(user: SessionUser, assignmentId: numbe
   await classForTeacher(user, targetClassId);
   const items = await itemsOf(assignmentId);
   const { sequelize, models } = db();
-  const id = await sequelize.transaction(async (transaction) => {
+  const id = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     const row = await models.Assignment.create(
       {
         classId: targetClassId,
@@ -183,7 +183,7 @@ export async function deleteDraft(user: SessionUser, assignmentId: number): Prom
   const assignment = await assignmentForTeacher(user, assignmentId);
   if (assignment.publishedAt) throw new AppError("conflict", PUBLISHED_DELETE_MESSAGE);
   const { sequelize, models } = db();
-  await sequelize.transaction(async (transaction) => {
+  await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     // Checked again inside the write: a publish that landed in between wins.
     const deleted = await models.Assignment.destroy({ where: { id: assignmentId, publishedAt: null }, transaction });
     if (deleted === 0) throw new AppError("conflict", PUBLISHED_DELETE_MESSAGE);

@@ -4,7 +4,7 @@
 // grader) rebuilds the same problem, and neighbours get different ones that cannot be worked out
 // from each other.
 import { createHmac, randomUUID } from "node:crypto";
-import { QueryTypes } from "sequelize";
+import { QueryTypes, Transaction } from "sequelize";
 import { db } from "@/lib/db";
 import { env } from "@/lib/env";
 import { sqliteDate } from "@/lib/group-commit";
@@ -55,7 +55,7 @@ export async function ensureVariants(items: readonly VariantItem[], studentId: n
   }
   const stale = existing.some((r) => r.status === "open" && r.attemptsAllowed !== attemptsAllowed);
   if (rows.length === 0 && !stale) return;
-  await sequelize.transaction(async (transaction) => {
+  await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     if (rows.length > 0) await sequelize.query(
       `INSERT OR IGNORE INTO practice_problems
          (id, user_id, assignment_item_id, variant, kind, level, seed, attempts_allowed, part_count, created_at, updated_at, attempts_used, status)
