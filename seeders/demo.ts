@@ -2,6 +2,7 @@ import crypto from "node:crypto";
 import bcrypt from "bcryptjs";
 import type { Database } from "@/lib/db";
 import type { Role } from "@/models";
+import { seedDemoHistory } from "./demo-history";
 
 // The invented demo scenario: Harbor Ridge Technical College, program Carpentry & Joinery.
 export const DEMO_PASSWORD = "layout-1616";
@@ -176,8 +177,6 @@ export async function seedDemo({ sequelize, models }: Database, cost: number): P
     return carp110.id;
   });
 
-  // Loaded only when seeding: the history pulls in the grader, every problem kind and sharp.
-  const { seedDemoHistory } = await import("./demo-history");
   const history = await seedDemoHistory({ sequelize, models }, classId, DEMO_STUDENTS.map((s) => s.email), Date.now());
   if (history) {
     const seconds = ((performance.now() - started) / 1000).toFixed(1);
