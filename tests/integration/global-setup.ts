@@ -14,7 +14,11 @@ declare module "vitest" {
 
 export default async function setup(project: TestProject) {
   const mail = await startMailCatcher();
-  const app = await startApp({ seed: true, env: { SMTP_URL: mail.smtpUrl } });
+  // A failed start must not leave the catcher running: there would be no teardown to stop it.
+  const app = await startApp({ seed: true, env: { SMTP_URL: mail.smtpUrl } }).catch(async (error: unknown) => {
+    await mail.stop();
+    throw error;
+  });
   project.provide("baseURL", app.url);
   project.provide("mailURL", mail.apiUrl);
   project.provide("secret", app.secret);
