@@ -1,10 +1,11 @@
 "use client";
 
-import { useCallback, useEffect, useId, useRef, useState } from "react";
+import { useCallback, useId, useRef, useState } from "react";
 import type { SamplePreview } from "@/lib/assignments/preview";
 import { ProblemFigureView } from "@/components/practice/problem-figure";
 import { Alert } from "@/components/ui/alert";
 import { callApi } from "@/components/ui/call-api";
+import { useModal } from "@/components/ui/use-modal";
 
 export type PreviewRequest = { kind: string; level: number; tolerance: "half" | "full"; itemNumber: number };
 
@@ -33,18 +34,11 @@ export function useSamplePreview() {
 }
 
 function SamplePreviewDialog({ state, onAnother, onClose }: { state: PreviewState | null; onAnother: () => void; onClose: () => void }) {
-  const ref = useRef<HTMLDialogElement>(null);
-  const titleId = useId();
   const open = state !== null;
+  const ref = useModal(open);
+  const titleId = useId();
   const { request, sample = 0, preview = null, error, loading = false } = state ?? {};
-  const another = onAnother;
 
-  useEffect(() => {
-    const dialog = ref.current;
-    if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
-    if (!open && dialog.open) dialog.close();
-  }, [open]);
 
   return (
     <dialog
@@ -105,7 +99,7 @@ function SamplePreviewDialog({ state, onAnother, onClose }: { state: PreviewStat
           </>
         ) : null}
         <div className="flex flex-wrap gap-3">
-          <button type="button" className="btn-primary" onClick={another} disabled={loading || !request}>
+          <button type="button" className="btn-primary" onClick={onAnother} disabled={loading || !request}>
             {loading && preview ? "Drawing…" : "Show another sample"}
           </button>
           <p className="self-center text-sm text-ink-soft">Each student gets their own numbers of this kind and level.</p>

@@ -1,6 +1,7 @@
 "use client";
 
-import { useEffect, useId, useRef, type ReactNode } from "react";
+import { useId, type ReactNode } from "react";
+import { useModal } from "./use-modal";
 
 type Props = {
   open: boolean;
@@ -22,14 +23,8 @@ type Props = {
  * traps focus, closes on Escape and returns focus to the button that opened it.
  */
 export function ConfirmDialog({ open, title, children, confirmLabel, tone = "primary", busy = false, busyLabel = "Working…", error, onConfirm, onCancel }: Props) {
-  const ref = useRef<HTMLDialogElement>(null);
+  const ref = useModal(open);
   const titleId = useId();
-  useEffect(() => {
-    const dialog = ref.current;
-    if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
-    if (!open && dialog.open) dialog.close();
-  }, [open]);
   return (
     <dialog
       ref={ref}
