@@ -1,7 +1,8 @@
 // CARP 110's past, so the gradebook and the charts have something to show on first start: the
 // students' variants of every assignment that has opened, their tries graded by the real grader
 // (with the slips each student tends to make, some late, some never started), lessons read and
-// practised, a few practice problems, and shop photos on the past assignments.
+// practised, a few practice problems, shop photos on the past assignments, and one score the
+// instructor changed by hand.
 //
 // Written straight into the database being seeded, like the rest of the demo: the seeder runs
 // before any server (the test harness seeds a file the app opens later, under a secret made after),
@@ -19,13 +20,14 @@ import { createRandom, type Random } from "@/lib/problems/random";
 import type { ErrorPattern } from "@/lib/problems";
 import { insertRows } from "./demo-rows";
 import { removeDemoPhotos, writeDemoPhoto, type DemoPhotoFile } from "./demo-photos";
+import { demoOverrideRow, OVERRIDE_COLUMNS } from "./demo-override";
 import { attemptParts, PROFILES, workProblem, type Profile } from "./demo-tries";
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
 const DAY = 24 * HOUR;
 
-type Student = { index: number; profile: Profile; late?: boolean; readsLessons?: boolean; photo?: string };
+type Student = { index: number; profile: Profile; late?: boolean; readsLessons?: boolean; photo?: string; overridden?: boolean };
 
 const struggling = (slip: ErrorPattern): Profile => ({ ...PROFILES.struggling, slip });
 
@@ -42,7 +44,7 @@ export const HISTORY_STUDENTS: readonly Student[] = [
   { index: 8, profile: PROFILES.steady, readsLessons: true, photo: "marks from left end.jpg" },
   { index: 12, profile: PROFILES.steady, late: true, readsLessons: true },
   { index: 7, profile: PROFILES.steady, late: true, readsLessons: false },
-  { index: 3, profile: struggling("divided-by-members"), readsLessons: true, photo: "my layout.jpg" },
+  { index: 3, profile: struggling("divided-by-members"), readsLessons: true, photo: "my layout.jpg", overridden: true },
   { index: 11, profile: struggling("forgot-member-width"), readsLessons: true },
   { index: 13, profile: struggling("on-center-for-gap"), readsLessons: true },
 ];
@@ -56,7 +58,7 @@ const ATTEMPT_COLUMNS = ["problem_id", "user_id", "assignment_item_id", "kind", 
 const PROBLEM_COLUMNS = ["id", "user_id", "assignment_item_id", "variant", "kind", "level", "seed", "attempts_allowed", "part_count", "attempts_used", "status", "finished_at", "created_at", "updated_at"];
 
 type Row = (string | number | null)[];
-type Item = { id: number; kind: string; level: number; problemCount: number };
+type Item = { id: number; kind: string; level: number; problemCount: number; points: number };
 type OpenAssignment = LateRules & { id: number; opensAt: Date; attemptsAllowed: number; items: Item[] };
 
 export type HistorySummary = { tries: number; problems: number; lessons: number; photos: number };
@@ -155,7 +157,7 @@ export async function seedDemoHistory(database: Database, classId: number, stude
   const assignments: OpenAssignment[] = [];
   for (const a of await models.Assignment.findAll({ where: { classId, status: "published" }, order: [["opensAt", "ASC"]] })) {
     const items = await models.AssignmentItem.findAll({ where: { assignmentId: a.id }, order: [["position", "ASC"]] });
-    assignments.push({ id: a.id, opensAt: a.opensAt, dueAt: a.dueAt, latePolicy: a.latePolicy, lateUntil: a.lateUntil, latePenaltyPercent: a.latePenaltyPercent, attemptsAllowed: a.attemptsAllowed, items: items.map((i) => ({ id: i.id, kind: i.kind, level: i.level, problemCount: i.problemCount })) });
+    assignments.push({ id: a.id, opensAt: a.opensAt, dueAt: a.dueAt, latePolicy: a.latePolicy, lateUntil: a.lateUntil, latePenaltyPercent: a.latePenaltyPercent, attemptsAllowed: a.attemptsAllowed, items: items.map((i) => ({ id: i.id, kind: i.kind, level: i.level, problemCount: i.problemCount, points: i.points })) });
   }
   // Variant seeds are made like the app's, but under a fixed key: the stored seed is what the app
   // reads, and a fixed key gives every fresh demo the same history.
@@ -167,6 +169,9 @@ export async function seedDemoHistory(database: Database, classId: number, stude
   const out = { problems: [] as Row[], attempts: [] as Row[], solvedLessons: new Set<string>() };
   const lessonRows: Row[] = [];
   const photos: { file: DemoPhotoFile; row: Row }[] = [];
+  const overrides: Row[] = [];
+  // The instructor's one change by hand: on the first past assignment under the daily penalty.
+  const overridden = assignments.find((a) => a.dueAt.getTime() < now && a.latePolicy === "penalty") ?? assignments.find((a) => a.dueAt.getTime() < now);
   try {
     for (const student of students) {
       const userId = idOf.get(studentEmails[student.index])!;
@@ -205,6 +210,9 @@ export async function seedDemoHistory(database: Database, classId: number, stude
         }
         if (past) pastSeen += 1;
       }
+      if (student.overridden && overridden) {
+        overrides.push(demoOverrideRow(overridden, userId, schoolClass.instructorId, { columns: PROBLEM_COLUMNS, rows: out.problems }, { columns: ATTEMPT_COLUMNS, rows: out.attempts }, now));
+      }
       const practiceFrom = Math.min(firstVisit, now - 10 * DAY);
       practiceProblems(student, userId, random, practiceFrom, now - MINUTE, out);
       if (student.readsLessons) lessonRows.push(...lessonProgress(student, userId, random, firstVisit - 3 * DAY, now - HOUR, out.solvedLessons));
@@ -216,6 +224,7 @@ export async function seedDemoHistory(database: Database, classId: number, stude
       await insertRows(sequelize, transaction, "attempts", ATTEMPT_COLUMNS, out.attempts);
       await insertRows(sequelize, transaction, "lesson_progress", ["user_id", "lesson_slug", "status", "opened_at", "completed_at", "created_at", "updated_at"], lessonRows);
       await insertRows(sequelize, transaction, "uploads", ["id", "assignment_id", "student_id", "stored_name", "thumb_name", "mime", "bytes", "width", "height", "original_name", "comment", "comment_by", "commented_at", "created_at", "updated_at"], photos.map((p) => p.row));
+      await insertRows(sequelize, transaction, "score_overrides", OVERRIDE_COLUMNS, overrides);
       return true;
     });
     if (!written) {

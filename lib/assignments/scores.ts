@@ -1,11 +1,11 @@
 // Scores computed from the attempts, never typed in: a handful of grouped queries per batch of
 // assignments, however many students and problems there are. The gradebook reuses these.
 import "server-only";
-import { QueryTypes } from "sequelize";
+import { QueryTypes, Transaction } from "sequelize";
 import { db } from "@/lib/db";
 import { assignmentRecord, type AssignmentRecord } from "./access";
 import type { StudentExtension } from "./policy";
-import { percentOf, problemCredit, roundPoints, workedLate, workStatus, type WorkStatus } from "./student-status";
+import { percentOf, roundPoints, workedLate, workStatus, type WorkStatus } from "./student-status";
 import { partCountOf } from "./variants";
 
 export type StudentScore = {
@@ -32,9 +32,66 @@ async function select<T extends object>(sql: string, replacements: unknown[]): P
   return db().sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 }
 
+// Unix milliseconds of a stored date. julianday() reads Sequelize's "YYYY-MM-DD HH:MM:SS.SSS +00:00";
+// a double holds the day count to well under a millisecond, so rounding gives the exact instant.
+const unixMs = (column: string) => `CAST(ROUND((julianday(${column}) - 2440587.5) * 86400000.0) AS INTEGER)`;
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/**
+ * One pass over the tries of these assignments, giving per student and assignment: the points
+ * earned, how many problems have any try, and the last try. A part earns its problem's points ÷
+ * parts × the credit share of the try in which it first came out right (once right it is not asked
+ * again). The share is policy.ts's creditShare written in SQL — 1 on time; under a daily penalty,
+ * 1 − days late (any part of a day counts) × percent, never below 0 — from the student's own due
+ * date. The gradebook integration test checks the result against a recomputation in JavaScript.
+ */
+function workSql(assignmentCount: number, byStudent: string): string {
+  const over = `(${unixMs("r.firstAt")} - ${unixMs("COALESCE(x.due_at, s.due_at)")})`;
+  const days = `(CASE WHEN ${over} <= 0 THEN 0 ELSE (${over} + ${DAY_MS - 1}) / ${DAY_MS} END)`;
+  const share = `(CASE WHEN s.late_policy = 'penalty' AND s.late_penalty_percent > 0
+      THEN MAX(0.0, 1.0 - ${days} * s.late_penalty_percent / 100.0) ELSE 1.0 END)`;
+  // The problem's columns ride along with each part's group (the same in every row of it), so the
+  // outer sum needs no second look-up of the problem or its item.
+  return `WITH parts AS (
+      SELECT a.problem_id AS problemId, p.user_id AS userId, i.assignment_id AS assignmentId, i.points, p.part_count AS partCount,
+        MIN(CASE WHEN a.verdict = 'correct' THEN a.created_at END) AS firstAt, MAX(a.created_at) AS lastAt
+      FROM practice_problems p JOIN assignment_items i ON i.id = p.assignment_item_id JOIN attempts a ON a.problem_id = p.id
+      WHERE i.assignment_id IN (${marks(Array.from({ length: assignmentCount }))}) AND p.variant < i.problem_count${byStudent}
+      GROUP BY a.problem_id, a.part)
+    SELECT r.assignmentId, r.userId, COUNT(DISTINCT r.problemId) AS triedProblems, MAX(r.lastAt) AS lastAt,
+      SUM(CASE WHEN r.firstAt IS NULL THEN 0.0 ELSE r.points * ${share} / r.partCount END) AS earned
+    FROM parts r
+    JOIN assignments s ON s.id = r.assignmentId
+    LEFT JOIN assignment_extensions x ON x.assignment_id = s.id AND x.student_id = r.userId
+    GROUP BY r.assignmentId, r.userId`;
+}
+
+/**
+ * Variants made before part counts were stored have none; the sum above needs it. Counting means
+ * rebuilding the problem from its seed, so it is done once here and kept (deterministic, so two
+ * requests filling the same row write the same number).
+ */
+async function sizeUnsizedProblems(assignmentIds: readonly Id[]): Promise<void> {
+  const unsized = await select<{ id: string; kind: string; level: number; seed: number }>(
+    `SELECT p.id, p.kind, p.level, p.seed FROM practice_problems p JOIN assignment_items i ON i.id = p.assignment_item_id
+     WHERE i.assignment_id IN (${marks(assignmentIds)}) AND p.part_count IS NULL`,
+    [...assignmentIds],
+  );
+  if (unsized.length === 0) return;
+  await db().sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+    for (const p of unsized) {
+      await db().sequelize.query("UPDATE practice_problems SET part_count = ? WHERE id = ? AND part_count IS NULL", {
+        replacements: [partCountOf(p.kind, p.level, p.seed), p.id],
+        transaction,
+      });
+    }
+  });
+}
+
 /**
  * Scores of the active students of each assignment's class (or only `onlyStudent`), keyed by
- * assignment id. Six queries for the whole batch.
+ * assignment id. Six queries for the whole batch, whatever its size (and, once, an update for
+ * variants made before part counts were stored; the gradebook test's generated class has such rows).
  */
 export async function scoresFor(assignments: readonly AssignmentRecord[], onlyStudent: Id | null = null, now = new Date()): Promise<Map<Id, StudentScore[]>> {
   const result = new Map<Id, StudentScore[]>(assignments.map((a) => [a.id, []]));
@@ -45,7 +102,8 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
   const byStudent = onlyStudent === null ? "" : " AND p.user_id = ?";
   const also = onlyStudent === null ? [] : [onlyStudent];
 
-  const [items, students, extensions, problems, corrects, activity] = await Promise.all([
+  await sizeUnsizedProblems(ids);
+  const [items, students, extensions, standing, work] = await Promise.all([
     select<{ id: Id; assignmentId: Id; points: number; problemCount: number }>(
       `SELECT id, assignment_id AS assignmentId, points, problem_count AS problemCount FROM assignment_items WHERE assignment_id IN (${marks(ids)})`,
       ids,
@@ -60,51 +118,38 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
        WHERE assignment_id IN (${marks(ids)})${onlyStudent === null ? "" : " AND s.student_id = ?"}`,
       [...ids, ...also],
     ),
-    select<{ id: string; userId: Id; assignmentId: Id; points: number; partCount: number | null; kind: string; level: number; seed: number; status: string }>(
-      `SELECT p.id, p.user_id AS userId, i.assignment_id AS assignmentId, i.points, p.part_count AS partCount, p.kind, p.level, p.seed, p.status
+    select<{ assignmentId: Id; userId: Id; finished: number }>(
+      `SELECT i.assignment_id AS assignmentId, p.user_id AS userId, SUM(p.status <> 'open') AS finished
        FROM practice_problems p JOIN assignment_items i ON i.id = p.assignment_item_id
-       WHERE i.assignment_id IN (${marks(ids)}) AND p.variant < i.problem_count${byStudent}`,
-      [...ids, ...also],
-    ),
-    // Once a part is right it is not asked again, so its earliest right answer is the one that counts.
-    select<{ problemId: string; firstAt: string }>(
-      `SELECT a.problem_id AS problemId, MIN(a.created_at) AS firstAt
-       FROM attempts a JOIN assignment_items i ON i.id = a.assignment_item_id JOIN practice_problems p ON p.id = a.problem_id
-       WHERE i.assignment_id IN (${marks(ids)}) AND a.verdict = 'correct' AND p.variant < i.problem_count${byStudent}
-       GROUP BY a.problem_id, a.part`,
-      [...ids, ...also],
-    ),
-    select<{ assignmentId: Id; userId: Id; tries: number; lastAt: string }>(
-      `SELECT i.assignment_id AS assignmentId, a.user_id AS userId, COUNT(DISTINCT a.problem_id || ':' || a.submission) AS tries, MAX(a.created_at) AS lastAt
-       FROM attempts a JOIN assignment_items i ON i.id = a.assignment_item_id JOIN practice_problems p ON p.id = a.problem_id
        WHERE i.assignment_id IN (${marks(ids)}) AND p.variant < i.problem_count${byStudent}
-       GROUP BY i.assignment_id, a.user_id`,
+       GROUP BY i.assignment_id, p.user_id`,
       [...ids, ...also],
     ),
+    select<{ assignmentId: Id; userId: Id; triedProblems: number; lastAt: string; earned: number }>(workSql(ids.length, byStudent), [...ids, ...also]),
   ]);
 
-  const firstCorrect = new Map<string, Date[]>();
-  for (const c of corrects) firstCorrect.set(c.problemId, [...(firstCorrect.get(c.problemId) ?? []), sqlDate(c.firstAt)]);
   const key = (assignmentId: Id, studentId: Id) => `${assignmentId}:${studentId}`;
   const extensionOf = new Map(extensions.map((e) => [key(e.assignmentId, e.studentId), e]));
-  const activityOf = new Map(activity.map((a) => [key(a.assignmentId, a.userId), a]));
-  const problemsOf = new Map<string, typeof problems>();
-  for (const p of problems) problemsOf.set(key(p.assignmentId, p.userId), [...(problemsOf.get(key(p.assignmentId, p.userId)) ?? []), p]);
+  const workOf = new Map(work.map((w) => [key(w.assignmentId, w.userId), w]));
+  const finishedOf = new Map(standing.map((f) => [key(f.assignmentId, f.userId), Number(f.finished)]));
+  const studentsOf = new Map<Id, typeof students>();
+  for (const s of students) {
+    const list = studentsOf.get(s.classId);
+    if (list) list.push(s);
+    else studentsOf.set(s.classId, [s]);
+  }
 
   for (const assignment of assignments) {
     const mine = items.filter((i) => i.assignmentId === assignment.id);
     const possible = mine.reduce((sum, i) => sum + i.points * i.problemCount, 0);
     const total = mine.reduce((sum, i) => sum + i.problemCount, 0);
-    for (const s of students.filter((st) => st.classId === assignment.classId)) {
+    for (const s of studentsOf.get(assignment.classId) ?? []) {
       const ext = extensionOf.get(key(assignment.id, s.id));
       const extension: StudentExtension = ext ? { dueAt: ext.dueAt ? sqlDate(ext.dueAt) : null, extraAttempts: ext.extraAttempts } : null;
-      const theirs = problemsOf.get(key(assignment.id, s.id)) ?? [];
-      const earned = roundPoints(
-        theirs.reduce((sum, p) => sum + problemCredit(p.points, p.partCount ?? partCountOf(p.kind, p.level, p.seed), firstCorrect.get(p.id) ?? [], assignment, extension), 0),
-      );
-      const act = activityOf.get(key(assignment.id, s.id));
-      const lastTryAt = act ? sqlDate(act.lastAt) : null;
-      const finished = theirs.filter((p) => p.status !== "open").length;
+      const worked = workOf.get(key(assignment.id, s.id));
+      const earned = roundPoints(Number(worked?.earned ?? 0));
+      const lastTryAt = worked ? sqlDate(worked.lastAt) : null;
+      const finished = finishedOf.get(key(assignment.id, s.id)) ?? 0;
       result.get(assignment.id)!.push({
         studentId: s.id,
         name: s.name,
@@ -113,7 +158,7 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
         possible,
         percent: percentOf(earned, possible),
         late: workedLate(lastTryAt, assignment, extension),
-        status: workStatus({ tries: act?.tries ?? 0, lastTryAt, finished, total }, now, assignment, extension),
+        status: workStatus({ tries: Number(worked?.triedProblems ?? 0), lastTryAt, finished, total }, now, assignment, extension),
         finished,
         total,
         lastActivityAt: lastTryAt?.toISOString() ?? null,

@@ -45,7 +45,7 @@ export function problemCredit(points: number, partCount: number, firstCorrectAt:
 }
 
 export type WorkFacts = {
-  /** Stored tries at any of the student's problems in this assignment. */
+  /** Stored tries at any of the student's problems (the gradebook passes the problems tried: only none vs some matters). */
   tries: number;
   lastTryAt: Date | null;
   /** Problems solved or out of tries, of all the student's problems (counted from the items). */

@@ -120,6 +120,22 @@ describe("gradebook totals", () => {
     expect(avery.cells[0].late).toBe(true);
     expect(avery.cells[0].status).toBe("late");
   });
+
+  it("count lateness from a student's extended due date", async () => {
+    const before = (await book(instructor)).students.find((s) => s.name === "Avery Quill")!.cells[0];
+    expect(before.late).toBe(true);
+    // Avery's battens started three days ago; an extension to a minute ago puts every try on time.
+    const avery = students[0];
+    await withDatabase(file, (db) => db.models.AssignmentExtension.create({ assignmentId: assignments[0].id, studentId: avery.id, dueAt: new Date(Date.now() - 60_000), grantedBy: instructor.id }));
+    try {
+      const cell = (await book(instructor)).students.find((s) => s.id === avery.id)!.cells[0];
+      expect(cell.computedEarned).toBeCloseTo((await recomputedScores(file, assignments[0].id)).get(avery.id) ?? 0, 2);
+      expect(cell.late).toBe(false);
+      expect(cell.computedEarned).toBeGreaterThan(before.computedEarned);
+    } finally {
+      await withDatabase(file, (db) => db.models.AssignmentExtension.destroy({ where: { assignmentId: assignments[0].id, studentId: avery.id } }));
+    }
+  });
 });
 
 describe("overrides", () => {

@@ -36,7 +36,8 @@ export async function startMailCatcher(): Promise<MailCatcher> {
     fs.rmSync(dir, { recursive: true, force: true });
   };
   const apiUrl = `http://127.0.0.1:${web}`;
-  const deadline = Date.now() + 20_000;
+  // A loaded machine (a build running beside the tests) can take well over 20 s to start it.
+  const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new Error(`maildev exited during start-up:\n${output}`);
     try {
@@ -47,7 +48,7 @@ export async function startMailCatcher(): Promise<MailCatcher> {
     await new Promise((r) => setTimeout(r, 100));
   }
   await stop();
-  throw new Error(`maildev did not start within 20 s:\n${output}`);
+  throw new Error(`maildev did not start within 60 s:\n${output}`);
 }
 
 /** Every message the catcher holds, newest last. */

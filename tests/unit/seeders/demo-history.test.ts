@@ -12,10 +12,11 @@ import { gradeValue, readAnswer } from "@/lib/grading/grade";
 import { findKind, type Level } from "@/lib/problems";
 import { DEMO_ASSIGNMENTS, DEMO_STUDENTS } from "@/seeders/demo";
 import { HISTORY_STUDENTS } from "@/seeders/demo-history";
+import { recomputedScores } from "../../support/assignment-scores";
 
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sixteenths-demo-history-"));
 const file = path.join(dir, "demo.sqlite");
-const TABLES = ["practice_problems", "attempts", "lesson_progress", "uploads", "assignments", "assignment_items"];
+const TABLES = ["practice_problems", "attempts", "lesson_progress", "uploads", "assignments", "assignment_items", "score_overrides"];
 
 type AttemptRow = {
   problemId: string; userId: number; itemId: number | null; kind: string; level: number; seed: number; submission: number; part: string;
@@ -147,5 +148,25 @@ describe("the demo class history", () => {
     expect(new Set(statuses.map((s) => s.status))).toEqual(new Set(["opened", "completed", "practised"]));
     const commented = await query<{ n: number }>("SELECT COUNT(*) AS n FROM uploads WHERE comment IS NOT NULL AND comment_by IS NOT NULL");
     expect(commented[0].n).toBe(1);
+  });
+
+  it("has one score changed by the instructor, whose history starts from the score the tries earn", async () => {
+    const rows = await query<{ assignmentId: number; studentId: number; points: number; fromPoints: number; toPoints: number; reason: string; createdBy: number; createdAt: string; email: string }>(
+      `SELECT o.assignment_id AS assignmentId, o.student_id AS studentId, o.points, o.from_points AS fromPoints, o.to_points AS toPoints, o.reason,
+              o.created_by AS createdBy, o.created_at AS createdAt, u.email FROM score_overrides o JOIN users u ON u.id = o.student_id`,
+    );
+    expect(rows).toHaveLength(1);
+    const [row] = rows;
+    expect(row.email).toBe(DEMO_STUDENTS[3].email);
+    expect(row.reason.length).toBeGreaterThan(20);
+    expect(row.createdBy).not.toBeNull();
+    expect(sqlDate(row.createdAt).getTime()).toBeLessThan(Date.now());
+    // The independent recomputation (tests/support) of what the tries earn is where the history starts.
+    const earned = (await recomputedScores(file, row.assignmentId)).get(row.studentId) ?? 0;
+    expect(row.fromPoints).toBe(Math.round(earned * 100));
+    const [{ possible }] = await query<{ possible: number }>(`SELECT SUM(points * problem_count) AS possible FROM assignment_items WHERE assignment_id = ${row.assignmentId}`);
+    expect(row.toPoints).toBeGreaterThan(row.fromPoints);
+    expect(row.toPoints).toBeLessThanOrEqual(possible * 100);
+    expect(row.points).toBe(row.toPoints);
   });
 });
