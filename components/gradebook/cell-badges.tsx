@@ -19,7 +19,7 @@ export function flagsOf(cell: GradebookCell): FlagKey[] {
 export function FlagMark({ flag }: { flag: FlagKey }) {
   const f = FLAGS.find((x) => x.key === flag)!;
   return (
-    <span className={`inline-flex h-5 min-w-5 items-center justify-center rounded-sm border px-0.5 text-xs leading-none font-bold ${f.className}`} title={f.text} data-flag={flag}>
+    <span className={`flag-mark ${f.className}`} title={f.text} data-flag={flag}>
       <span aria-hidden="true">{f.mark}</span>
       <span className="sr-only">{f.word}</span>
     </span>

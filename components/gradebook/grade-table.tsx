@@ -120,7 +120,7 @@ export function GradeTable({ classId, assignments, students, onOpen }: Props) {
                 {s.cells.map((cell, ci) => {
                   const a = assignments[ci];
                   return (
-                    <td key={a.id} className="border-b border-rule p-0 text-right group-hover:bg-paper-sunk" data-status={cell.status}>
+                    <td key={a.id} className="gb-td" data-status={cell.status}>
                       <button
                         type="button"
                         data-cell={`${ri}:${ci + 1}`}
@@ -128,7 +128,7 @@ export function GradeTable({ classId, assignments, students, onOpen }: Props) {
                         onFocus={() => setActive({ row: ri, col: ci + 1 })}
                         onClick={() => onOpen(a.id, s.id)}
                         aria-label={`${s.name}, ${a.title}: ${cell.excused ? "excused" : `${cell.earned} of ${cell.possible} points`}, ${cell.status.replace("-", " ")}. Open the work`}
-                        className="flex w-full items-center justify-end gap-1 px-2 py-1.5 outline-offset-[-3px] focus-visible:outline-3 focus-visible:outline-chalk"
+                        className="gb-cell"
                       >
                         <CellFlags cell={cell} />
                         <span className="measure">{cellText(cell)}</span>

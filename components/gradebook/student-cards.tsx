@@ -17,7 +17,7 @@ export function StudentCards({ classId, assignments, students, onOpen }: { class
           <ul className="divide-y divide-rule border-y border-rule">
             {s.cells.map((cell, i) => (
               <li key={cell.assignmentId}>
-                <button type="button" className="flex w-full items-center justify-between gap-2 py-2 text-left" onClick={() => onOpen(assignments[i].id, s.id)}>
+                <button type="button" className="gb-line" onClick={() => onOpen(assignments[i].id, s.id)}>
                   <span className="min-w-0 break-words">{assignments[i].title}</span>
                   <span className="flex shrink-0 items-center gap-1">
                     <CellFlags cell={cell} />
