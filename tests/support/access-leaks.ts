@@ -71,9 +71,10 @@ export function plainText(body: string): string {
 }
 
 /**
- * The problem's drawing is taken out before the search: it is drawn to scale, so its coordinates are
- * decimals of inches that can equal an answer by chance (a batten's position, say) — the drawing's
- * labels are checked by each kind's property test instead. What is left is text a person reads.
+ * The problem's drawing is left out of this search. It is drawn to scale, so its coordinates are
+ * decimal inches: some equal an answer by chance (a batten at 17.5 when the battens total 17 1/2"),
+ * and the positions it draws follow from the answer by design. Whether the drawing may carry them
+ * is a question about the drawing, not about which route lets a reply out; this search is about the latter.
  */
 export function withoutDrawings(text: string): string {
   return text
