@@ -18,6 +18,12 @@ const limiters = {
   joinClass: new RateLimiterMemory({ keyPrefix: "join-class", points: 10, duration: 15 * 60 }),
   // Per address: a classroom accepting on the school's one IP, not a script trying tokens.
   acceptInvitation: new RateLimiterMemory({ keyPrefix: "accept-invitation", points: 40, duration: 15 * 60 }),
+  // Per instructor, per request (an invite list, a resend or a roster import): a term's start
+  // sends a few batches and some resends; a stolen account spamming strangers sends hundreds.
+  sendInvitations: new RateLimiterMemory({ keyPrefix: "send-invitations", points: 30, duration: 60 * 60 }),
+  // Per signed-in user: a student photographs a few layouts per assignment; each is re-encoded
+  // by sharp, so a script uploading in a loop would tie up the server and fill the disk.
+  photoUploads: new RateLimiterMemory({ keyPrefix: "photo-uploads", points: 30, duration: 15 * 60 }),
 };
 
 export type LimitName = keyof typeof limiters;
