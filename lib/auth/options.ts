@@ -5,6 +5,7 @@ import { verifyCredentials } from "@/lib/accounts/users";
 import { sessionCookieName, sessionCookieOptions, usesSecureCookies } from "@/lib/auth/cookies";
 import { reset } from "@/lib/auth/rate-limit";
 import { signInLimitKey } from "@/lib/auth/sign-in-limit";
+import { sessionVersionOf } from "@/lib/auth/session-user";
 
 export const SESSION_MAX_AGE_SECONDS = 30 * 24 * 60 * 60;
 
@@ -30,7 +31,7 @@ export const authOptions: NextAuthOptions = {
         const user = await verifyCredentials(parsed.data.email, parsed.data.password);
         if (!user) return null;
         await reset("signIn", key);
-        return { id: String(user.id), email: user.email, name: user.name, role: user.role };
+        return { id: String(user.id), email: user.email, name: user.name, role: user.role, sessionVersion: await sessionVersionOf(user.id) };
       },
     }),
   ],
@@ -39,6 +40,7 @@ export const authOptions: NextAuthOptions = {
       if (user) {
         token.uid = Number(user.id);
         token.role = user.role;
+        token.sv = user.sessionVersion;
       }
       return token;
     },
