@@ -34,7 +34,8 @@ export async function consume(name: LimitName, key: string): Promise<void> {
     await limiters[name].consume(key);
   } catch (rejection) {
     if (rejection instanceof Error) throw rejection;
-    const wait = Math.ceil(((rejection as { msBeforeNext?: number }).msBeforeNext ?? 60_000) / 1000);
+    // At least one second: a Retry-After of 0 would invite an immediate retry, and a 0 would drop the header.
+    const wait = Math.max(1, Math.ceil(((rejection as { msBeforeNext?: number }).msBeforeNext ?? 60_000) / 1000));
     const minutes = Math.max(1, Math.ceil(wait / 60));
     throw new AppError("rate_limited", `Too many tries. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`, undefined, wait);
   }
