@@ -9,6 +9,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare passwordHash: string;
   declare role: CreationOptional<Role>;
+  /** Raised by a password reset; a session token from an older version is refused. */
+  declare sessionVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -20,6 +22,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         name: { type: DataTypes.STRING(120), allowNull: false },
         passwordHash: { type: DataTypes.STRING(100), allowNull: false },
         role: { type: DataTypes.STRING(16), allowNull: false, defaultValue: "student", validate: { isIn: [ROLES as unknown as string[]] } },
+        sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

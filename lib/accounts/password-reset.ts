@@ -70,6 +70,8 @@ export async function confirmPasswordReset(token: string, password: string, now 
       throw new AppError("conflict", why, { token: why });
     }
     await User.update({ passwordHash }, { where: { id: reset.userId }, transaction });
+    // Ends every session already open: whoever knew the old password may be signed in somewhere.
+    await User.increment("sessionVersion", { by: 1, where: { id: reset.userId }, transaction });
     await PasswordReset.update({ usedAt: now }, { where: { userId: reset.userId, usedAt: { [Op.is]: null } }, transaction });
     const user = await User.findByPk(reset.userId, { attributes: ["email"], transaction });
     return { email: user!.email };

@@ -2,8 +2,10 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { signInSchema } from "@/lib/accounts/schemas";
 import { verifyCredentials } from "@/lib/accounts/users";
-import { clientAddress, consume, reset } from "@/lib/auth/rate-limit";
-import { AppError } from "@/lib/errors";
+import { sessionCookieName, sessionCookieOptions, usesSecureCookies } from "@/lib/auth/cookies";
+import { reset } from "@/lib/auth/rate-limit";
+import { signInLimitKey } from "@/lib/auth/sign-in-limit";
+import { sessionVersionOf } from "@/lib/auth/session-user";
 
 export const SESSION_MAX_AGE_SECONDS = 30 * 24 * 60 * 60;
 
@@ -12,6 +14,10 @@ export const authOptions: NextAuthOptions = {
   // next-auth reads NEXTAUTH_SECRET itself; lib/env validates it at the first request.
   secret: process.env.NEXTAUTH_SECRET,
   pages: { signIn: "/signin", error: "/signin" },
+  // Stated rather than left to next-auth's guess, so proxy.ts and the route handlers read the
+  // same cookie name (lib/auth/cookies.ts explains when it is Secure).
+  useSecureCookies: usesSecureCookies(),
+  cookies: { sessionToken: { name: sessionCookieName(), options: sessionCookieOptions() } },
   providers: [
     CredentialsProvider({
       name: "E-mail and password",
@@ -19,18 +25,13 @@ export const authOptions: NextAuthOptions = {
       async authorize(credentials, req) {
         const parsed = signInSchema.safeParse(credentials ?? {});
         if (!parsed.success) return null;
-        const key = `${parsed.data.email}|${clientAddress(req?.headers)}`;
-        try {
-          await consume("signIn", key);
-        } catch (error) {
-          // next-auth passes a thrown message through to the sign-in page as `error`.
-          if (error instanceof AppError) throw new Error(error.message);
-          throw error;
-        }
+        // The try was already counted by the sign-in route (app/api/auth/[...nextauth]), which
+        // answers 429 with Retry-After before next-auth runs; here a success gives the points back.
+        const key = signInLimitKey(parsed.data.email, req?.headers);
         const user = await verifyCredentials(parsed.data.email, parsed.data.password);
         if (!user) return null;
         await reset("signIn", key);
-        return { id: String(user.id), email: user.email, name: user.name, role: user.role };
+        return { id: String(user.id), email: user.email, name: user.name, role: user.role, sessionVersion: await sessionVersionOf(user.id) };
       },
     }),
   ],
@@ -39,6 +40,7 @@ export const authOptions: NextAuthOptions = {
       if (user) {
         token.uid = Number(user.id);
         token.role = user.role;
+        token.sv = user.sessionVersion;
       }
       return token;
     },

@@ -18,6 +18,12 @@ const limiters = {
   joinClass: new RateLimiterMemory({ keyPrefix: "join-class", points: 10, duration: 15 * 60 }),
   // Per address: a classroom accepting on the school's one IP, not a script trying tokens.
   acceptInvitation: new RateLimiterMemory({ keyPrefix: "accept-invitation", points: 40, duration: 15 * 60 }),
+  // Per instructor, per request (an invite list, a resend or a roster import): a term's start
+  // sends a few batches and some resends; a stolen account spamming strangers sends hundreds.
+  sendInvitations: new RateLimiterMemory({ keyPrefix: "send-invitations", points: 30, duration: 60 * 60 }),
+  // Per signed-in user: a student photographs a few layouts per assignment; each is re-encoded
+  // by sharp, so a script uploading in a loop would tie up the server and fill the disk.
+  photoUploads: new RateLimiterMemory({ keyPrefix: "photo-uploads", points: 30, duration: 15 * 60 }),
 };
 
 export type LimitName = keyof typeof limiters;
@@ -28,7 +34,8 @@ export async function consume(name: LimitName, key: string): Promise<void> {
     await limiters[name].consume(key);
   } catch (rejection) {
     if (rejection instanceof Error) throw rejection;
-    const wait = Math.ceil(((rejection as { msBeforeNext?: number }).msBeforeNext ?? 60_000) / 1000);
+    // At least one second: a Retry-After of 0 would invite an immediate retry, and a 0 would drop the header.
+    const wait = Math.max(1, Math.ceil(((rejection as { msBeforeNext?: number }).msBeforeNext ?? 60_000) / 1000));
     const minutes = Math.max(1, Math.ceil(wait / 60));
     throw new AppError("rate_limited", `Too many tries. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`, undefined, wait);
   }

@@ -1,8 +1,9 @@
 import { getToken } from "next-auth/jwt";
 import { NextRequest, NextResponse } from "next/server";
 import { ZodError } from "zod";
-import { findUserById } from "@/lib/accounts/users";
+import { sessionCookieName, usesSecureCookies } from "@/lib/auth/cookies";
 import { decideAccess, type SessionUser } from "@/lib/auth/roles";
+import { userForToken } from "@/lib/auth/session-user";
 import { env } from "@/lib/env";
 import { AppError, errorBody, fieldErrorsFrom } from "@/lib/errors";
 import type { Role } from "@/models";
@@ -11,8 +12,8 @@ export async function userFromRequest(req: Request): Promise<SessionUser | null>
   // getToken reads `req.cookies`, which only a NextRequest has. Copy the headers only:
   // wrapping the request itself would take its body away from the handler.
   const nextReq = new NextRequest(req.url, { headers: req.headers });
-  const token = await getToken({ req: nextReq, secret: env().NEXTAUTH_SECRET });
-  return token?.uid ? findUserById(token.uid) : null;
+  const token = await getToken({ req: nextReq, secret: env().NEXTAUTH_SECRET, cookieName: sessionCookieName(), secureCookie: usesSecureCookies() });
+  return userForToken(token);
 }
 
 /** Every JSON failure leaves through here, in the one error shape. */

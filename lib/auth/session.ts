@@ -1,11 +1,12 @@
 import "server-only";
 import { cache } from "react";
-import { getServerSession } from "next-auth";
+import { getToken } from "next-auth/jwt";
 import { forbidden, redirect } from "next/navigation";
-import { headers } from "next/headers";
-import { findUserById } from "@/lib/accounts/users";
-import { authOptions } from "@/lib/auth/options";
+import { cookies, headers } from "next/headers";
+import { sessionCookieName, usesSecureCookies } from "@/lib/auth/cookies";
 import { decideAccess, type SessionUser } from "@/lib/auth/roles";
+import { userForToken } from "@/lib/auth/session-user";
+import { env } from "@/lib/env";
 import type { Role } from "@/models";
 
 /**
@@ -13,10 +14,11 @@ import type { Role } from "@/models";
  * role or a deleted account takes effect at once rather than when the token expires.
  */
 export const getCurrentUser = cache(async (): Promise<SessionUser | null> => {
-  const session = await getServerSession(authOptions);
-  const id = session?.user?.id;
-  if (!id) return null;
-  return findUserById(id);
+  // The token itself rather than getServerSession: the session object next-auth builds for the
+  // browser leaves out the session version, which the check below needs.
+  const req = { cookies: await cookies(), headers: await headers() } as unknown as Parameters<typeof getToken>[0]["req"];
+  const token = await getToken({ req, secret: env().NEXTAUTH_SECRET, cookieName: sessionCookieName(), secureCookie: usesSecureCookies() });
+  return userForToken(token);
 });
 
 async function signInRedirect(): Promise<never> {

@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { consume } from "@/lib/auth/rate-limit";
 import { withAuth } from "@/lib/auth/route";
 import { readPhotoUpload } from "@/lib/uploads/request";
 import { assignmentParamsSchema, listQuerySchema } from "@/lib/uploads/schemas";
@@ -15,6 +16,8 @@ export const GET = withAuth<Params>([], async (req, { user, params }) => {
 /** One photo per request (multipart, field "photo"), so the page can show each file's progress. */
 export const POST = withAuth<Params>([], async (req, { user, params }) => {
   const { assignmentId } = assignmentParamsSchema.parse(params);
+  // Counted before the body is read, so a refused upload costs no parsing or re-encoding.
+  await consume("photoUploads", `user:${user.id}`);
   const photo = await readPhotoUpload(req);
   return NextResponse.json({ upload: await saveUpload(user, assignmentId, photo) }, { status: 201 });
 });

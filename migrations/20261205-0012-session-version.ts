@@ -1,0 +1,13 @@
+import { DataTypes, type QueryInterface } from "sequelize";
+
+// A password reset must end the sessions already open (a stolen laptop, a shared shop computer).
+// Sessions are signed tokens with nothing stored server-side, so each token carries the account's
+// session version from its sign-in, and a reset raises the version: older tokens stop working.
+// The user row is read on every request anyway (by primary key), so the check costs no extra query.
+export async function up({ context: qi }: { context: QueryInterface }) {
+  await qi.addColumn("users", "session_version", { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
+}
+
+export async function down({ context: qi }: { context: QueryInterface }) {
+  await qi.removeColumn("users", "session_version");
+}
