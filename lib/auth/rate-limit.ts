@@ -1,29 +1,34 @@
 import { RateLimiterMemory } from "rate-limiter-flexible";
 import { AppError } from "@/lib/errors";
 
+// Suites that make many legitimate writes as one person within seconds (the access matrix builds
+// some sixty copies of its fixtures as one instructor and one student) start their own app with
+// every limit multiplied. Production leaves it unset; the rate-limit suite runs without it.
+const scale = Math.max(1, Number(process.env.RATE_LIMIT_SCALE) || 1);
+
 // In memory is enough for one server process; a second instance would need a shared store.
 const limiters = {
-  signIn: new RateLimiterMemory({ keyPrefix: "sign-in", points: 8, duration: 15 * 60 }),
+  signIn: new RateLimiterMemory({ keyPrefix: "sign-in", points: 8 * scale, duration: 15 * 60 }),
   // A school shop signs up a whole class from one address, so allow a class-sized burst.
-  signUp: new RateLimiterMemory({ keyPrefix: "sign-up", points: 40, duration: 60 * 60 }),
+  signUp: new RateLimiterMemory({ keyPrefix: "sign-up", points: 40 * scale, duration: 60 * 60 }),
   // Far above what a student types (a try every two seconds), low enough to stop a script guessing.
   // The load benchmark raises it through the environment; nothing else should.
-  answers: new RateLimiterMemory({ keyPrefix: "answers", points: Number(process.env.ANSWERS_PER_MINUTE) || 30, duration: 60 }),
-  newProblem: new RateLimiterMemory({ keyPrefix: "new-problem", points: 60, duration: 60 }),
+  answers: new RateLimiterMemory({ keyPrefix: "answers", points: (Number(process.env.ANSWERS_PER_MINUTE) || 30) * scale, duration: 60 }),
+  newProblem: new RateLimiterMemory({ keyPrefix: "new-problem", points: 60 * scale, duration: 60 }),
   // Per address: enough for a few tries, too few to flood an inbox.
-  passwordReset: new RateLimiterMemory({ keyPrefix: "password-reset", points: 5, duration: 15 * 60 }),
+  passwordReset: new RateLimiterMemory({ keyPrefix: "password-reset", points: 5 * scale, duration: 15 * 60 }),
   // Per client: a shop class behind the school's one address may all forget at once; a script may not.
-  passwordResetClient: new RateLimiterMemory({ keyPrefix: "password-reset-client", points: 30, duration: 15 * 60 }),
+  passwordResetClient: new RateLimiterMemory({ keyPrefix: "password-reset-client", points: 30 * scale, duration: 15 * 60 }),
   // Per signed-in student: a mistyped code or two is normal; a script walking the code space is not.
-  joinClass: new RateLimiterMemory({ keyPrefix: "join-class", points: 10, duration: 15 * 60 }),
+  joinClass: new RateLimiterMemory({ keyPrefix: "join-class", points: 10 * scale, duration: 15 * 60 }),
   // Per address: a classroom accepting on the school's one IP, not a script trying tokens.
-  acceptInvitation: new RateLimiterMemory({ keyPrefix: "accept-invitation", points: 40, duration: 15 * 60 }),
+  acceptInvitation: new RateLimiterMemory({ keyPrefix: "accept-invitation", points: 40 * scale, duration: 15 * 60 }),
   // Per instructor, per request (an invite list, a resend or a roster import): a term's start
   // sends a few batches and some resends; a stolen account spamming strangers sends hundreds.
-  sendInvitations: new RateLimiterMemory({ keyPrefix: "send-invitations", points: 30, duration: 60 * 60 }),
+  sendInvitations: new RateLimiterMemory({ keyPrefix: "send-invitations", points: 30 * scale, duration: 60 * 60 }),
   // Per signed-in user: a student photographs a few layouts per assignment; each is re-encoded
   // by sharp, so a script uploading in a loop would tie up the server and fill the disk.
-  photoUploads: new RateLimiterMemory({ keyPrefix: "photo-uploads", points: 30, duration: 15 * 60 }),
+  photoUploads: new RateLimiterMemory({ keyPrefix: "photo-uploads", points: 30 * scale, duration: 15 * 60 }),
 };
 
 export type LimitName = keyof typeof limiters;

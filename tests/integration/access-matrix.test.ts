@@ -43,7 +43,7 @@ beforeAll(async () => {
   // Its own app and mail catcher: the matrix signs in and writes a great deal, and must not spend
   // the shared suite app's rate limits.
   mail = await startMailCatcher();
-  app = await startApp({ seed: false, env: { SMTP_URL: mail.smtpUrl } }).catch(async (error: unknown) => {
+  app = await startApp({ seed: false, env: { SMTP_URL: mail.smtpUrl, RATE_LIMIT_SCALE: "100" } }).catch(async (error: unknown) => {
     await mail.stop();
     throw error;
   });
