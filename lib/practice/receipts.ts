@@ -8,6 +8,7 @@ import { QueryTypes } from "sequelize";
 import { z } from "zod";
 import { db } from "@/lib/db";
 import { AppError } from "@/lib/errors";
+import { pruneReceipts } from "./receipt-retention";
 
 export const IDEMPOTENCY_HEADER = "Idempotency-Key";
 
@@ -92,7 +93,9 @@ export async function answerOnce<T>(claim: ReceiptClaim | null, answer: () => Pr
   const stored = await findReceipt(claim);
   if (stored) return replay(claim, stored);
   try {
-    return { status: 200, body: await answer(), replayed: false };
+    const body = await answer();
+    pruneNowAndThen();
+    return { status: 200, body, replayed: false };
   } catch (error) {
     if (error instanceof ReceiptTaken) return replay(claim, error.receipt);
     if (error instanceof AppError && error.code === "conflict") {
@@ -101,6 +104,17 @@ export async function answerOnce<T>(claim: ReceiptClaim | null, answer: () => Pr
     }
     throw error;
   }
+}
+
+const PRUNE_EVERY_MS = 3600 * 1000;
+const pruning = globalThis as typeof globalThis & { __sixteenthsReceiptsPruned?: number };
+
+/** At most once an hour per server, after an answer is stored: old receipts go, without holding up the reply. */
+function pruneNowAndThen(): void {
+  const now = Date.now();
+  if (now - (pruning.__sixteenthsReceiptsPruned ?? 0) < PRUNE_EVERY_MS) return;
+  pruning.__sixteenthsReceiptsPruned = now;
+  pruneReceipts(db().sequelize, new Date(now)).catch((error: unknown) => console.error("Could not prune old answer receipts:", error));
 }
 
 /** Response headers for a reply: a replay says so, which helps when reading logs. */

@@ -72,3 +72,25 @@ describe("group commit with a claimed key", () => {
     expect(row.n).toBe(2);
   });
 });
+
+describe("receipt retention", () => {
+  it("prunes receipts older than a week and keeps the rest", async () => {
+    const { pruneReceipts, RECEIPT_RETENTION_MS } = await import("@/lib/practice/receipt-retention");
+    const now = new Date();
+    const at = (ms: number) => sqliteDate(new Date(now.getTime() - ms));
+    const rows = [RECEIPT_RETENTION_MS + 60_000, RECEIPT_RETENTION_MS - 60_000, 1000].map((age, i) => ({
+      visitor_id: "old",
+      key: randomUUID(),
+      problem_id: ids[3],
+      submission: 10 + i,
+      fingerprint: "f",
+      status: 200,
+      response: "{}",
+      created_at: at(age),
+    }));
+    await db().sequelize.getQueryInterface().bulkInsert("answer_receipts", rows);
+    expect(await pruneReceipts(db().sequelize, now)).toBe(1);
+    const left = await db().sequelize.query<{ submission: number }>("SELECT submission FROM answer_receipts WHERE visitor_id = 'old' ORDER BY submission", { type: QueryTypes.SELECT });
+    expect(left.map((r) => r.submission)).toEqual([11, 12]);
+  });
+});
