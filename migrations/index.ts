@@ -5,6 +5,7 @@ import * as practice from "./20261202-0004-practice";
 import * as classesAssignmentsMail from "./20261203-0005-classes-assignments-mail";
 import * as problemPartCount from "./20261203-0009-problem-part-count";
 import * as scoreOverrides from "./20261204-0010-score-overrides";
+import * as idempotencyKeys from "./20261205-0011-idempotency-keys";
 import * as sessionVersion from "./20261205-0012-session-version";
 
 // Listed by hand, in order, so the same list runs under tsx, vitest and Next without a file glob.
@@ -16,5 +17,6 @@ export const migrations = [
   { name: "20261203-0005-classes-assignments-mail", ...classesAssignmentsMail },
   { name: "20261203-0009-problem-part-count", ...problemPartCount },
   { name: "20261204-0010-score-overrides", ...scoreOverrides },
+  { name: "20261205-0011-idempotency-keys", ...idempotencyKeys },
   { name: "20261205-0012-session-version", ...sessionVersion },
 ];

@@ -11,6 +11,7 @@ import { useHydrated } from "@/components/ui/use-hydrated";
 import { AnswerField } from "./answer-field";
 import { PreviousTries } from "./previous-tries";
 import { ProblemFigureView } from "./problem-figure";
+import { newSubmissionKey, sendAnswers, type SendingState } from "./send-answers";
 
 type Shown = ProblemView & Partial<AssignmentProblemExtras>;
 
@@ -45,6 +46,11 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
   const [formError, setFormError] = useState<string>();
   const [busy, setBusy] = useState(false);
   const [lateNote, setLateNote] = useState(false);
+  const [sending, setSending] = useState<SendingState | null>(null);
+  // The submission whose reply has not come back yet: sending the same answers again reuses its
+  // key and body, so if the first send was stored after all the server returns that reply instead
+  // of counting a second try.
+  const unanswered = useRef<{ signature: string; key: string; body: { answers: Record<string, string>; timeMs: number } } | null>(null);
   const started = useRef(0);
   const solutionRef = useRef<HTMLHeadingElement>(null);
   // An assignment problem also stops taking answers when the student's window closes.
@@ -62,16 +68,23 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
     setBusy(true);
     setFormError(undefined);
     const open = problem.parts.filter((p) => problem.results[p.key]?.verdict !== "correct");
-    const result = await postJson<ProblemUpdate & Partial<AssignmentProblemExtras>>(assignment?.answerUrl ?? `/api/practice/${problem.id}/answers`, {
-      answers: Object.fromEntries(open.map((p) => [p.key, answers[p.key] ?? ""])),
-      timeMs: Math.min(Date.now() - started.current, 86_400_000),
-    });
+    const chosen = Object.fromEntries(open.map((p) => [p.key, answers[p.key] ?? ""]));
+    const signature = JSON.stringify([problem.id, problem.attemptsUsed, chosen]);
+    if (unanswered.current?.signature !== signature) {
+      unanswered.current = { signature, key: newSubmissionKey(), body: { answers: chosen, timeMs: Math.min(Date.now() - started.current, 86_400_000) } };
+    }
+    const { key, body } = unanswered.current;
+    const result = await sendAnswers<ProblemUpdate & Partial<AssignmentProblemExtras>>(assignment?.answerUrl ?? `/api/practice/${problem.id}/answers`, body, key, setSending);
+    setSending(null);
     setBusy(false);
     if (!result.ok) {
+      // A refusal stored nothing, so the next send is a new submission; a lost reply keeps its key.
+      if (!result.retryable) unanswered.current = null;
       setFieldErrors(result.error.fields ?? {});
       setFormError(result.error.message);
       return;
     }
+    unanswered.current = null;
     setFieldErrors({});
     setProblem((current) => ({ ...current, ...result.problem }));
     setLateNote(result.late === true);
@@ -131,10 +144,18 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
           {final ? null : (
             <div className="flex flex-wrap items-center gap-3">
               <button type="submit" className="btn-primary">
-                {busy ? "Checking…" : "Check answers"}
+                {busy ? "Saving…" : "Check answers"}
               </button>
-              <p className="text-sm text-ink-soft" aria-live="polite">
-                {triesLeft} {triesLeft === 1 ? "try" : "tries"} left. Enter checks the answers.
+              <p className="text-sm text-ink-soft" aria-live="polite" data-sending={sending?.phase}>
+                {sending?.phase === "retrying" ? (
+                  <strong className="text-caution">Could not reach the server, trying again ({sending.attempt} of 2)… Your answers are kept and will count once.</strong>
+                ) : sending ? (
+                  "Saving your answers…"
+                ) : (
+                  <>
+                    {triesLeft} {triesLeft === 1 ? "try" : "tries"} left. Enter checks the answers.
+                  </>
+                )}
               </p>
             </div>
           )}

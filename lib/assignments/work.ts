@@ -11,6 +11,7 @@ import { recordProgress } from "@/lib/lessons/progress";
 import { lessonSlugs } from "@/lib/lessons/catalog";
 import { ERROR_PATTERNS, isErrorPattern } from "@/lib/problems";
 import { gradeTry, latestResults, loadProblem, storedProblem, type ProblemWithAttempts, type Submission } from "@/lib/practice/tries";
+import type { ReceiptClaim } from "@/lib/practice/receipts";
 import { buildUpdate, buildView, workOut, type ProblemUpdate, type ProblemView, type StoredAttempt, type WorkedProblem } from "@/lib/practice/view";
 import { assignmentForStudent, itemsOf, type AssignmentItemRecord, type AssignmentRecord } from "./access";
 import { acceptsWork, closesAt, effectiveDue, isLate, type StudentExtension } from "./policy";
@@ -216,7 +217,7 @@ export async function studentProblem(user: SessionUser, assignmentId: number, pr
  * Grades one try at a student's assignment problem: only within the assignment's dates for this
  * student, with the item's tolerance, stored with the item's id. The reply says whether it was late.
  */
-export async function answerProblem(user: SessionUser, assignmentId: number, problemId: string, submission: Submission): Promise<{ problem: AssignmentProblemUpdate; late: boolean }> {
+export async function answerProblem(user: SessionUser, assignmentId: number, problemId: string, submission: Submission, receipt: ReceiptClaim | null = null): Promise<{ problem: AssignmentProblemUpdate; late: boolean }> {
   const { assignment, extension } = await assignmentForStudent(user, assignmentId);
   let { found, item, items } = await findVariant(user, assignmentId, problemId);
   const now = new Date();
@@ -239,11 +240,15 @@ export async function answerProblem(user: SessionUser, assignmentId: number, pro
   if (found.problem.status !== "open") throw new AppError("conflict", "This problem is finished; its answers are in.");
 
   const work = workOut(found.problem, item.tolerance);
-  const graded = await gradeTry(found, work, submission, { userId: user.id, assignmentItemId: item.id, now });
+  const number = numberOf(items, item, await variantIndex(problemId));
+  // The reply is built before the write so it can be stored with the try (see gradeTry).
+  const graded = await gradeTry(found, work, submission, { userId: user.id, assignmentItemId: item.id, now, receipt }, (g) => {
+    const after: Variant = { problem: g.problem, attempts: [...found.attempts, ...g.stored], assignmentItemId: item.id, item, number };
+    const { revealed, ...extras } = extrasOf(after, work, { assignment, extension, now });
+    return { problem: { ...buildUpdate(g.problem, g.results, work, revealed), ...extras }, late: isLate(now, assignment, extension) };
+  });
   if (graded.solved && lessonSlugs().includes(work.kind.lesson.slug)) {
     await recordProgress(user, work.kind.lesson.slug, "practised", lessonSlugs());
   }
-  const after: Variant = { problem: graded.problem, attempts: [...found.attempts, ...graded.stored], assignmentItemId: item.id, item, number: numberOf(items, item, await variantIndex(problemId)) };
-  const { revealed, ...extras } = extrasOf(after, work, { assignment, extension, now });
-  return { problem: { ...buildUpdate(graded.problem, graded.results, work, revealed), ...extras }, late: isLate(now, assignment, extension) };
+  return graded.response;
 }

@@ -8,6 +8,7 @@ import { lessonSlugs } from "@/lib/lessons/catalog";
 import { findKind, type Level } from "@/lib/problems";
 import { newSeed } from "@/lib/problems/random";
 import { ATTEMPTS_PER_PROBLEM } from "./limits";
+import type { ReceiptClaim } from "./receipts";
 import { gradeTry, latestResults, loadProblem, storedProblem, type ProblemWithAttempts, type Submission } from "./tries";
 import { buildUpdate, buildView, workOut, type ProblemUpdate, type ProblemView } from "./view";
 
@@ -52,13 +53,13 @@ export async function getProblem(owner: PracticeOwner, id: string): Promise<Prob
 }
 
 /** Grades one try (lib/practice/tries.ts); a solved problem counts as practice on its lesson. */
-export async function submitAnswers(owner: PracticeOwner, id: string, submission: Submission): Promise<ProblemUpdate> {
+export async function submitAnswers(owner: PracticeOwner, id: string, submission: Submission, receipt: ReceiptClaim | null = null): Promise<ProblemUpdate> {
   const found = await findOwned(owner, id);
   if (found.problem.status !== "open") throw new AppError("conflict", "This problem is finished. Start a new one to keep practising.");
   const work = workOut(found.problem);
-  const graded = await gradeTry(found, work, submission, { userId: owner.user?.id ?? null, assignmentItemId: null, now: new Date() });
+  const graded = await gradeTry(found, work, submission, { userId: owner.user?.id ?? null, assignmentItemId: null, now: new Date(), receipt }, (g) => buildUpdate(g.problem, g.results, work));
   if (graded.solved && owner.user && lessonSlugs().includes(work.kind.lesson.slug)) {
     await recordProgress(owner.user, work.kind.lesson.slug, "practised", lessonSlugs());
   }
-  return buildUpdate(graded.problem, graded.results, work);
+  return graded.response;
 }

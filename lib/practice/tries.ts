@@ -4,10 +4,11 @@
 import "server-only";
 import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db";
-import { guardedInsert, sqliteDate } from "@/lib/group-commit";
+import { guardedWrite, sqliteDate } from "@/lib/group-commit";
 import { AppError } from "@/lib/errors";
 import { gradeValue, readAnswer, type PartGrade } from "@/lib/grading/grade";
 import { MAX_ANSWER_LENGTH } from "./limits";
+import { claimColumns, ReceiptTaken, type ReceiptClaim } from "./receipts";
 import { partResult, type PartResult, type StoredAttempt, type StoredProblem, type WorkedProblem } from "./view";
 
 /** `assignmentItemId` is set when the problem is a student's variant of an assignment item. */
@@ -65,8 +66,11 @@ export function latestResults({ kind, params, parts, expected }: WorkedProblem, 
 
 export type Submission = { answers: Record<string, string>; timeMs?: number };
 
-/** Who the try is stored for, and (for an assignment) which item it counts toward. */
-export type TryContext = { userId: number | null; assignmentItemId: number | null; now: Date };
+/**
+ * Who the try is stored for, (for an assignment) which item it counts toward, and the client's
+ * idempotency key when it sent one.
+ */
+export type TryContext = { userId: number | null; assignmentItemId: number | null; now: Date; receipt?: ReceiptClaim | null };
 
 /** The problem after the try, the latest result per part, and the rows this try stored. */
 export type GradedTry = { problem: StoredProblem; results: Record<string, PartResult | null>; stored: StoredAttempt[]; solved: boolean };
@@ -76,8 +80,19 @@ export type GradedTry = { problem: StoredProblem; results: Record<string, PartRe
  * nothing is stored and the error says what to fix per part. The try is stored as one row per part,
  * together with the problem's new count and status, in one transaction; a second try racing the
  * first is refused. Resolves only after that transaction has committed.
+ *
+ * `respond` builds the caller's reply from the graded try before anything is written, so that with
+ * a receipt the reply is stored in the same transaction as the try: a retry gets exactly the reply
+ * the first request was given, even when the server died before sending it. If a twin request
+ * with the same key committed first, nothing is written and `ReceiptTaken` carries its reply.
  */
-export async function gradeTry({ problem, attempts }: ProblemWithAttempts, work: WorkedProblem, submission: Submission, context: TryContext): Promise<GradedTry> {
+export async function gradeTry<R>(
+  { problem, attempts }: ProblemWithAttempts,
+  work: WorkedProblem,
+  submission: Submission,
+  context: TryContext,
+  respond: (graded: GradedTry) => R,
+): Promise<GradedTry & { response: R }> {
   const { kind, params, parts, expected } = work;
   const previous = latestResults(work, attempts);
   const open = parts.filter((p) => previous[p.key]?.verdict !== "correct");
@@ -103,7 +118,19 @@ export async function gradeTry({ problem, attempts }: ProblemWithAttempts, work:
   const used = problem.attemptsUsed + 1;
   const status = solved ? "solved" : used >= problem.attemptsAllowed ? "failed" : "open";
   const at = sqliteDate(context.now);
-  const written = await guardedInsert({
+  const results: Record<string, PartResult | null> = { ...previous };
+  const stored: StoredAttempt[] = [];
+  for (const part of open) {
+    const grade = grades[part.key];
+    const row = { part: part.key, raw: submission.answers[part.key].trim().slice(0, MAX_ANSWER_LENGTH), value: grade.value.toFraction(), verdict: grade.verdict, pattern: grade.pattern, submission: used, createdAt: at };
+    stored.push(row);
+    results[part.key] = partResult(row, grade.readAs, grade.message);
+  }
+  const graded: GradedTry = { problem: { ...problem, attemptsUsed: used, status }, results, stored, solved };
+  const response = respond(graded);
+  const { receipt } = context;
+
+  const outcome = await guardedWrite({
     table: "practice_problems",
     id: problem.id,
     // The try count read above must still hold: a second try racing this one is refused.
@@ -131,15 +158,17 @@ export async function gradeTry({ problem, attempts }: ProblemWithAttempts, work:
         at,
       ]),
     },
+    once: receipt
+      ? {
+          table: "answer_receipts",
+          unique: claimColumns(receipt),
+          values: { problem_id: problem.id, submission: used, fingerprint: receipt.fingerprint, status: 200, response: JSON.stringify(response), created_at: at },
+        }
+      : undefined,
   });
-  if (!written) throw new AppError("conflict", "These answers crossed with another try at the same problem. Reload to see where it stands.");
-  const results: Record<string, PartResult | null> = { ...previous };
-  const stored: StoredAttempt[] = [];
-  for (const part of open) {
-    const grade = grades[part.key];
-    const row = { part: part.key, raw: submission.answers[part.key].trim().slice(0, MAX_ANSWER_LENGTH), value: grade.value.toFraction(), verdict: grade.verdict, pattern: grade.pattern, submission: used, createdAt: at };
-    stored.push(row);
-    results[part.key] = partResult(row, grade.readAs, grade.message);
+  if (outcome.kind === "claimed") {
+    throw new ReceiptTaken({ fingerprint: String(outcome.row.fingerprint), status: Number(outcome.row.status), response: String(outcome.row.response) });
   }
-  return { problem: { ...problem, attemptsUsed: used, status }, results, stored, solved };
+  if (outcome.kind === "refused") throw new AppError("conflict", "These answers crossed with another try at the same problem. Reload to see where it stands.");
+  return { ...graded, response };
 }

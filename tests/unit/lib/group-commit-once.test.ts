@@ -1,0 +1,96 @@
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { randomUUID } from "node:crypto";
+import { QueryTypes } from "sequelize";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+
+// A real, migrated SQLite file of this file's own; env is read on first use, so set it first.
+const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sixteenths-unit-"));
+process.env.DATABASE_PATH = path.join(dir, "unit.sqlite");
+process.env.NEXTAUTH_SECRET = "unit-test-secret-unit-test-secret-1234";
+
+const { prepareDatabase } = await import("@/lib/setup");
+const { db } = await import("@/lib/db");
+const { guardedWrite, sqliteDate } = await import("@/lib/group-commit");
+
+const ids = Array.from({ length: 4 }, () => randomUUID());
+
+beforeAll(async () => {
+  await prepareDatabase(process.env.DATABASE_PATH!, { seed: false, bcryptCost: 10 });
+  await db().models.PracticeProblem.bulkCreate(ids.map((id, seed) => ({ id, userId: null, visitorId: "v", kind: "even-gap", level: 1, seed, attemptsAllowed: 3 })));
+});
+
+afterAll(async () => {
+  await db().sequelize.close();
+  fs.rmSync(dir, { recursive: true, force: true });
+});
+
+/** A try at `id` after `used` tries, claiming the visitor's `key` with `reply` as its receipt. */
+function keyedTry(id: string, used: number, key: string, reply: string) {
+  const now = sqliteDate(new Date());
+  return guardedWrite({
+    table: "practice_problems",
+    id,
+    expect: { status: "open", attempts_used: used },
+    set: { attempts_used: used + 1, status: "open", finished_at: null, updated_at: now },
+    into: {
+      table: "attempts",
+      columns: ["problem_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "created_at"],
+      rows: [[id, "even-gap", 1, 0, used + 1, "gap", "1", "1", "2", "incorrect", now]],
+    },
+    once: { table: "answer_receipts", unique: { visitor_id: "v", key }, values: { problem_id: id, submission: used + 1, fingerprint: "f", status: 200, response: reply, created_at: now } },
+  });
+}
+
+describe("group commit with a claimed key", () => {
+  it("of identical writes sent at once, one is stored and the rest learn what was stored", async () => {
+    const key = randomUUID();
+    const outcomes = await Promise.all(Array.from({ length: 8 }, (_, i) => keyedTry(ids[0], 0, key, `reply ${i}`)));
+    expect(outcomes.filter((o) => o.kind === "written")).toHaveLength(1);
+    const claimed = outcomes.filter((o) => o.kind === "claimed");
+    expect(claimed).toHaveLength(7);
+    const winner = outcomes.findIndex((o) => o.kind === "written");
+    for (const o of claimed) expect(o.kind === "claimed" && o.row.response).toBe(`reply ${winner}`);
+    expect(await db().models.Attempt.count({ where: { problemId: ids[0] } })).toBe(1);
+    expect((await db().models.PracticeProblem.findByPk(ids[0]))?.attemptsUsed).toBe(1);
+  });
+
+  it("the same key at two problems sent together: the second finds the first's claim and writes nothing", async () => {
+    const key = randomUUID();
+    const [first, second] = await Promise.all([keyedTry(ids[1], 0, key, "one"), keyedTry(ids[2], 0, key, "two")]);
+    expect(first.kind).toBe("written");
+    expect(second).toMatchObject({ kind: "claimed", row: { problem_id: ids[1], response: "one" } });
+    expect(await db().models.Attempt.count({ where: { problemId: ids[2] } })).toBe(0);
+  });
+
+  it("tries with new keys at one problem are each stored with their own receipt", async () => {
+    const outcomes = await Promise.all([0, 1].map((n) => keyedTry(ids[3], n, randomUUID(), `r${n}`)));
+    // The second expects the first already stored: it waits for the next batch and its guard holds.
+    expect(outcomes.map((o) => o.kind)).toEqual(["written", "written"]);
+    const [row] = await db().sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM answer_receipts WHERE problem_id = ?", { replacements: [ids[3]], type: QueryTypes.SELECT });
+    expect(row.n).toBe(2);
+  });
+});
+
+describe("receipt retention", () => {
+  it("prunes receipts older than a week and keeps the rest", async () => {
+    const { pruneReceipts, RECEIPT_RETENTION_MS } = await import("@/lib/practice/receipt-retention");
+    const now = new Date();
+    const at = (ms: number) => sqliteDate(new Date(now.getTime() - ms));
+    const rows = [RECEIPT_RETENTION_MS + 60_000, RECEIPT_RETENTION_MS - 60_000, 1000].map((age, i) => ({
+      visitor_id: "old",
+      key: randomUUID(),
+      problem_id: ids[3],
+      submission: 10 + i,
+      fingerprint: "f",
+      status: 200,
+      response: "{}",
+      created_at: at(age),
+    }));
+    await db().sequelize.getQueryInterface().bulkInsert("answer_receipts", rows);
+    expect(await pruneReceipts(db().sequelize, now)).toBe(1);
+    const left = await db().sequelize.query<{ submission: number }>("SELECT submission FROM answer_receipts WHERE visitor_id = 'old' ORDER BY submission", { type: QueryTypes.SELECT });
+    expect(left.map((r) => r.submission)).toEqual([11, 12]);
+  });
+});
