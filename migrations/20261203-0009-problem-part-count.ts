@@ -6,6 +6,8 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addColumn("practice_problems", "part_count", { type: DataTypes.INTEGER, allowNull: true });
 }
 
+// SQLite's own DROP COLUMN: Sequelize's removeColumn rebuilds the table and loses the composite
+// unique index on the variant. The counts are lost either way; the scores fill them in again.
 export async function down({ context: qi }: { context: QueryInterface }) {
-  await qi.removeColumn("practice_problems", "part_count");
+  await qi.sequelize.query("ALTER TABLE practice_problems DROP COLUMN part_count");
 }

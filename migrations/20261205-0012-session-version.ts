@@ -8,6 +8,8 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addColumn("users", "session_version", { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
 }
 
+// SQLite's own DROP COLUMN: Sequelize's removeColumn rebuilds the table instead, and dropping the
+// old users table would cascade through every foreign key that points at it.
 export async function down({ context: qi }: { context: QueryInterface }) {
-  await qi.removeColumn("users", "session_version");
+  await qi.sequelize.query("ALTER TABLE users DROP COLUMN session_version");
 }
