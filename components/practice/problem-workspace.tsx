@@ -23,6 +23,11 @@ type Props = {
   headingLevel?: "h1" | "h2" | "h3";
 } & ({ assignment?: undefined; /** Called for "Another problem"; the standalone page navigates, a lesson swaps in place. */ onAnother: (problem: ProblemView) => void } | { assignment: AssignmentMode; onAnother?: undefined });
 
+/** The schema names a refused answer `answers.<part>`, the grader names it `<part>`; each box shows either. */
+function partErrors(fields: Record<string, string> | undefined): Record<string, string> {
+  return Object.fromEntries(Object.entries(fields ?? {}).map(([key, message]) => [key.replace(/^answers\./, ""), message]));
+}
+
 async function postJson<T>(url: string, body: unknown): Promise<{ ok: true; problem: T; late?: boolean } | { ok: false; error: ErrorBody["error"] }> {
   try {
     const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
@@ -47,6 +52,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
   const [lateNote, setLateNote] = useState(false);
   const started = useRef(0);
   const solutionRef = useRef<HTMLHeadingElement>(null);
+  const answersForm = useRef<HTMLFormElement>(null);
   // An assignment problem also stops taking answers when the student's window closes.
   const final = assignment ? problem.accepting === false : problem.status !== "open";
   const Heading = headingLevel;
@@ -68,8 +74,9 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
     });
     setBusy(false);
     if (!result.ok) {
-      setFieldErrors(result.error.fields ?? {});
+      setFieldErrors(partErrors(result.error.fields));
       setFormError(result.error.message);
+      requestAnimationFrame(() => answersForm.current?.querySelector<HTMLInputElement>('[aria-invalid="true"]')?.focus());
       return;
     }
     setFieldErrors({});
@@ -112,7 +119,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
         {problem.figure ? <ProblemFigureView figure={problem.figure} /> : null}
       </div>
 
-      <form onSubmit={submit} noValidate className="space-y-4" aria-label="Your answers">
+      <form ref={answersForm} onSubmit={submit} noValidate className="space-y-4" aria-label="Your answers">
         <fieldset disabled={!hydrated || busy} className="min-w-0 space-y-4">
           <legend className="sr-only">Your answers</legend>
           {problem.parts.map((part) => (
