@@ -1,7 +1,7 @@
 // Fuzzing the tape-notation reader and the fraction bench with random text.
 //
 // The unit suite runs FUZZ_RUNS strings per property, 5,000 by default (about 15 s in all on
-// a loaded two-core machine). The full 100,000 per property took about four minutes there,
+// a loaded two-core machine). The full 100,000 per property took about four and a half minutes there,
 // too long for every CI run, so `npm run fuzz` runs them on its own.
 // A failing case prints its seed and path: rerun with FUZZ_SEED/FUZZ_PATH to replay it.
 import { describe, expect, it } from "vitest";
@@ -15,8 +15,11 @@ const replay = process.env.FUZZ_SEED ? { seed: Number(process.env.FUZZ_SEED), pa
 const options = { numRuns: RUNS, ...replay };
 // Seconds of work at the full count on a loaded two-core machine; a hang still fails.
 const SLOW = { timeout: 600_000 };
-// A single read takes microseconds; a call this slow is a runaway, not a busy machine.
+// A single read takes microseconds; a call this slow is a runaway, not a busy machine. A slow
+// call is timed again and the fastest try counts: a pause for garbage collection or a busy
+// machine is not the reader's doing, whereas a runaway is slow every time.
 const PER_CALL_MS = 250;
+const TRIES = 3;
 
 const anyUnicode = fc.string({ unit: "binary", maxLength: 120 });
 const measureAlphabet = fc.constantFrom(
@@ -75,10 +78,15 @@ const nearValid = fc
 const anyMeasureText = fc.oneof(anyUnicode, alphabetText, nearValid, validMeasure.map((m) => m.text));
 
 function timed<T>(run: () => T): T {
-  const start = performance.now();
-  const result = run();
-  expect(performance.now() - start).toBeLessThan(PER_CALL_MS);
-  return result;
+  let fastest = Infinity;
+  let result: T | undefined;
+  for (let attempt = 0; attempt < TRIES && fastest >= PER_CALL_MS; attempt++) {
+    const start = performance.now();
+    result = run();
+    fastest = Math.min(fastest, performance.now() - start);
+  }
+  expect(fastest).toBeLessThan(PER_CALL_MS);
+  return result as T;
 }
 
 type Answer = { ok: true; value: Fraction } | { ok: false; error: { message: string; index: number } };
