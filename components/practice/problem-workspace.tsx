@@ -8,6 +8,7 @@ import type { ProblemUpdate, ProblemView } from "@/lib/practice/view";
 import { Alert } from "@/components/ui/alert";
 import { LocalTime } from "@/components/ui/local-time";
 import { useHydrated } from "@/components/ui/use-hydrated";
+import { focusFirstInvalid } from "@/components/ui/use-server-form";
 import { AnswerField } from "./answer-field";
 import { PreviousTries } from "./previous-tries";
 import { ProblemFigureView } from "./problem-figure";
@@ -76,7 +77,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
     if (!result.ok) {
       setFieldErrors(partErrors(result.error.fields));
       setFormError(result.error.message);
-      requestAnimationFrame(() => answersForm.current?.querySelector<HTMLInputElement>('[aria-invalid="true"]')?.focus());
+      focusFirstInvalid(() => answersForm.current);
       return;
     }
     setFieldErrors({});

@@ -11,10 +11,23 @@ type Failure = Pick<ApiFailure, "message" | "fields">;
  * disabled while busy, or behind a confirm dialog that is closing, for a frame or two.
  */
 export function focusWhenReady<T extends FieldValues>(setFocus: UseFormSetFocus<T>, name: FieldPath<T>) {
+  retryFocus(() => setFocus(name), () => document.activeElement?.getAttribute("name") === name);
+}
+
+/** The first field marked invalid inside `container`, for forms not run by react-hook-form. */
+export function focusFirstInvalid(container: () => HTMLElement | null) {
+  const target = () => container()?.querySelector<HTMLElement>('[aria-invalid="true"]') ?? null;
+  retryFocus(
+    () => target()?.focus(),
+    () => document.activeElement !== null && document.activeElement === target(),
+  );
+}
+
+function retryFocus(focus: () => void, done: () => boolean) {
   let frames = 0;
   const attempt = () => {
-    setFocus(name);
-    if (document.activeElement?.getAttribute("name") !== name && ++frames < 30) requestAnimationFrame(attempt);
+    focus();
+    if (!done() && ++frames < 30) requestAnimationFrame(attempt);
   };
   requestAnimationFrame(attempt);
 }

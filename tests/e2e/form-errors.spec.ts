@@ -222,3 +222,22 @@ test("password reset: a new password too short for the server is refused beside 
   await expectSignedInAs(page, learner.name);
   await expect(page).not.toHaveURL(/signin/);
 });
+
+test("invitation: a newcomer's password too short for the server is refused beside it, and no account is made", async ({ page, browser, baseURL }) => {
+  const newcomer = `e2e-forms-newcomer-${run}@example.com`;
+  await signIn(page, teacher.email, PASSWORD);
+  await expectSignedInAs(page, teacher.name);
+  const invited = await page.request.post(`/api/classes/${ids.classId}/invitations`, { data: { addresses: newcomer } });
+  expect(invited.status()).toBe(201);
+  const mail = await waitForMail(process.env.E2E_MAIL_URL!, newcomer, /added you to/);
+
+  const visitor = await (await browser.newContext()).newPage();
+  await visitor.goto(linkIn(mail, `${baseURL}/invite/`));
+  await visitor.getByLabel("Your name").fill("Noor Haddad");
+  await visitor.getByLabel("Password").fill("a-long-enough-phrase");
+  await rewriteNext(visitor, /\/api\/invitations\/[^/]+\/accept$/, (body) => ({ ...body, password: "short" }));
+  await visitor.getByRole("button", { name: "Create account and join" }).click();
+  await expectBeside(visitor.getByLabel("Password"), /10 characters/);
+  expect(await count("User", { email: newcomer })).toBe(0);
+  await visitor.context().close();
+});
