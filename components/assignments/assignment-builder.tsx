@@ -4,16 +4,16 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
-import { useForm, useWatch, type FieldPath, type Resolver } from "react-hook-form";
+import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { assignmentSchema, MAX_ATTEMPTS, type AssignmentData } from "@/lib/assignments/schemas";
 import { REVEAL_LABELS, pluralize, type KindOption } from "@/lib/assignments/teacher-format";
 import type { TeacherAssignment } from "@/lib/assignments/teacher-views";
-import type { ErrorBody } from "@/lib/errors";
 import { Alert } from "@/components/ui/alert";
 import { MarkdownText } from "@/components/ui/markdown";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 import { BuilderItems } from "./builder-items";
 import { BuilderSchedule } from "./builder-schedule";
 import { initialValues, toPayload, totalPoints, type BuilderValues } from "./builder-values";
@@ -42,7 +42,6 @@ export function AssignmentBuilder({ classId, className, activeStudents, kinds, e
   const hydrated = useHydrated();
   const ids = { instructions: useId(), tries: useId(), reveal: useId() };
   const [savedId, setSavedId] = useState<number | null>(existing?.id ?? null);
-  const [formError, setFormError] = useState<string>();
   const [busy, setBusy] = useState(false);
   const [confirming, setConfirming] = useState<AssignmentData | null>(null);
   const samples = useSamplePreview();
@@ -50,19 +49,15 @@ export function AssignmentBuilder({ classId, className, activeStudents, kinds, e
   const locked = existing?.locked ?? false;
   const published = existing?.status === "published";
 
-  const { register, control, handleSubmit, setError, formState: { errors } } = useForm<BuilderValues, unknown, AssignmentData>({
+  const { register, control, handleSubmit, setError, setFocus, formState: { errors } } = useForm<BuilderValues, unknown, AssignmentData>({
     resolver,
     defaultValues: initialValues(existing),
   });
   const items = useWatch({ control, name: "items" });
   const instructions = useWatch({ control, name: "instructions" });
 
-  const showServerError = (error: ErrorBody["error"]) => {
-    const fields = Object.entries(error.fields ?? {});
-    const onForm = fields.filter(([name]) => FIELD_NAMES.test(name));
-    for (const [name, message] of onForm) setError(name as FieldPath<BuilderValues>, { type: "server", message });
-    setFormError(onForm.length > 0 ? `${error.message} The marked fields need attention.` : error.message);
-  };
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, FIELD_NAMES);
+  const showServerError = (error: { message: string; fields: Record<string, string> }) => showFailure(error, { summary: `${error.message} The marked fields need attention.` });
 
   const save = async (data: AssignmentData): Promise<number | null> => {
     const result = savedId

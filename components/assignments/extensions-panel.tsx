@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
-import { useForm, type FieldPath, type Resolver } from "react-hook-form";
+import { useForm, type Resolver } from "react-hook-form";
 import type { z } from "zod";
 import type { ExtensionView } from "@/lib/assignments/extensions";
 import { extensionSchema, MAX_EXTRA_ATTEMPTS } from "@/lib/assignments/schemas";
@@ -13,6 +13,7 @@ import { LocalTime, fromLocalInput, toLocalInput } from "@/components/ui/local-t
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 type Student = { studentId: number; name: string; email: string; status: "active" | "invited" };
@@ -31,20 +32,18 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
   const hydrated = useHydrated();
   const studentFieldId = useId();
   const [extensions, setExtensions] = useState(initial);
-  const [formError, setFormError] = useState<string>();
   const [done, setDone] = useState<string>();
   const [removing, setRemoving] = useState<ExtensionView | null>(null);
   const [busy, setBusy] = useState(false);
   const { register, handleSubmit, reset, setError, setFocus, formState: { errors, isSubmitting } } = useForm<Values, unknown, Output>({ resolver, defaultValues: EMPTY });
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, ["studentId", "dueAt", "extraAttempts", "note"]);
 
   const submit = handleSubmit(async (data) => {
     setFormError(undefined);
     setDone(undefined);
     const result = await callApi<{ extension: ExtensionView }>(`/api/assignments/${assignmentId}/extensions`, "PUT", data);
     if (!result.ok) {
-      const fields = Object.entries(result.fields ?? {}).filter(([k]) => ["studentId", "dueAt", "extraAttempts", "note"].includes(k));
-      for (const [name, message] of fields) setError(name as FieldPath<Values>, { type: "server", message });
-      if (fields.length === 0) setFormError(result.message);
+      showFailure(result);
       return;
     }
     const saved = result.data.extension;
@@ -141,7 +140,13 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
                 <label htmlFor={studentFieldId} className="mb-1 block font-semibold">
                   Student
                 </label>
-                <select id={studentFieldId} className="input" aria-invalid={errors.studentId ? true : undefined} {...register("studentId")}>
+                <select
+                  id={studentFieldId}
+                  className="input"
+                  aria-invalid={errors.studentId ? true : undefined}
+                  aria-describedby={errors.studentId ? `${studentFieldId}-error` : undefined}
+                  {...register("studentId")}
+                >
                   <option value="">Choose a student…</option>
                   {roster.map((s) => (
                     <option key={s.studentId} value={s.studentId}>
@@ -150,7 +155,7 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
                     </option>
                   ))}
                 </select>
-                {errors.studentId ? <p className="mt-1 text-sm font-semibold text-danger">{errors.studentId.type === "server" ? errors.studentId.message : "Choose a student from the roster."}</p> : null}
+                {errors.studentId ? <p id={`${studentFieldId}-error`} className="mt-1 text-sm font-semibold text-danger">{errors.studentId.type === "server" ? errors.studentId.message : "Choose a student from the roster."}</p> : null}
               </div>
               <TextField label="New due date (optional)" type="datetime-local" error={errors.dueAt?.message} {...register("dueAt")} />
               <TextField label="Extra tries per problem" type="number" inputMode="numeric" min={0} max={MAX_EXTRA_ATTEMPTS} error={errors.extraAttempts?.message} {...register("extraAttempts")} />

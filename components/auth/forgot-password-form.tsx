@@ -5,39 +5,33 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { resetRequestSchema, type ResetRequestInput } from "@/lib/accounts/password-reset-schemas";
-import type { ErrorBody } from "@/lib/errors";
+import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
 
 export function ForgotPasswordForm({ initialEmail }: { initialEmail: string }) {
-  const [formError, setFormError] = useState<string>();
   const [sent, setSent] = useState<string>();
   const hydrated = useHydrated();
   const {
     register,
     handleSubmit,
     setError,
+    setFocus,
     getValues,
     formState: { errors, isSubmitting },
   } = useForm<ResetRequestInput>({ resolver: zodResolver(resetRequestSchema), defaultValues: { email: initialEmail } });
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, ["email"]);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(undefined);
-    let response: Response;
-    try {
-      response = await fetch("/api/password-reset", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(values) });
-    } catch {
-      setFormError("Could not reach Sixteenths. Check your connection and try again.");
+    const result = await callApi<{ message?: string }>("/api/password-reset", "POST", values);
+    if (!result.ok) {
+      showFailure(result);
       return;
     }
-    const body = (await response.json().catch(() => null)) as ({ message?: string } & Partial<ErrorBody>) | null;
-    if (!response.ok) {
-      if (body?.error?.fields?.email) setError("email", { message: body.error.fields.email });
-      else setFormError(body?.error?.message ?? "Asking for a link failed. Try again in a moment.");
-      return;
-    }
-    setSent(body?.message ?? "If an account uses that address, a link is on its way.");
+    setSent(result.data.message ?? "If an account uses that address, a link is on its way.");
   });
 
   if (sent) {

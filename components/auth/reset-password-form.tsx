@@ -5,7 +5,8 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { resetFormSchema, type ResetFormInput } from "@/lib/accounts/password-reset-schemas";
-import type { ErrorBody } from "@/lib/errors";
+import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
@@ -13,34 +14,27 @@ import { useHydrated } from "@/components/ui/use-hydrated";
 type Outcome = { done: true; email: string } | { done: false; linkSpent: string };
 
 export function ResetPasswordForm({ token, email }: { token: string; email: string }) {
-  const [formError, setFormError] = useState<string>();
   const [outcome, setOutcome] = useState<Outcome>();
   const hydrated = useHydrated();
   const {
     register,
     handleSubmit,
     setError,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm<ResetFormInput>({ resolver: zodResolver(resetFormSchema), defaultValues: { password: "", confirm: "" } });
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, ["password"]);
 
   const onSubmit = handleSubmit(async ({ password }) => {
     setFormError(undefined);
-    let response: Response;
-    try {
-      response = await fetch("/api/password-reset/confirm", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ token, password }) });
-    } catch {
-      setFormError("Could not reach Sixteenths. Your password is not changed yet; check your connection and try again.");
+    const result = await callApi<{ email?: string }>("/api/password-reset/confirm", "POST", { token, password });
+    if (result.ok) {
+      setOutcome({ done: true, email: result.data.email ?? email });
       return;
     }
-    const body = (await response.json().catch(() => null)) as ({ email?: string } & Partial<ErrorBody>) | null;
-    if (response.ok) {
-      setOutcome({ done: true, email: body?.email ?? email });
-      return;
-    }
-    const fields = body?.error?.fields ?? {};
-    if (fields.password) setError("password", { message: fields.password });
-    else if (fields.token) setOutcome({ done: false, linkSpent: fields.token });
-    else setFormError(body?.error?.message ?? "Saving the new password failed. Try again in a moment.");
+    // The link itself is not a field to correct: a spent link replaces the form.
+    if (result.fields.token && !result.fields.password) setOutcome({ done: false, linkSpent: result.fields.token });
+    else showFailure(result);
   });
 
   if (outcome?.done) {

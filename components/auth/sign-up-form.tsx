@@ -3,40 +3,30 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { signIn } from "next-auth/react";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { signUpSchema, type SignUpInput } from "@/lib/accounts/schemas";
-import type { ErrorBody } from "@/lib/errors";
 import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
+import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 import { useHydrated } from "@/components/ui/use-hydrated";
 
 export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
-  const [formError, setFormError] = useState<string>();
   const hydrated = useHydrated();
   const {
     register,
     handleSubmit,
     setError,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema), defaultValues: { name: "", email: "", password: "" } });
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, ["name", "email", "password"]);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(undefined);
-    let response: Response;
-    try {
-      response = await fetch("/api/signup", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(values) });
-    } catch {
-      setFormError("Could not reach Sixteenths. Check your connection and try again.");
-      return;
-    }
-    if (!response.ok) {
-      const body = (await response.json().catch(() => null)) as ErrorBody | null;
-      const fields = body?.error.fields ?? {};
-      for (const [name, message] of Object.entries(fields)) {
-        if (name === "name" || name === "email" || name === "password") setError(name, { message });
-      }
-      if (Object.keys(fields).length === 0) setFormError(body?.error.message ?? "Sign-up failed. Try again.");
+    const created = await callApi("/api/signup", "POST", values);
+    if (!created.ok) {
+      showFailure(created);
       return;
     }
     const result = await signIn("credentials", { email: values.email, password: values.password, redirect: false });

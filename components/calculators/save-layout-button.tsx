@@ -3,11 +3,12 @@
 import Link from "next/link";
 import { useId, useRef, useState } from "react";
 import type { CalculatorKind } from "@/lib/calculators";
-import type { ErrorBody } from "@/lib/errors";
+import { callApi } from "@/components/ui/call-api";
 
 /** Saves the current layout under a name, for signed-in users; others get a sign-in link. */
 export function SaveLayoutButton({ kind, query, signedIn }: { kind: CalculatorKind; query: string; signedIn: boolean }) {
   const dialog = useRef<HTMLDialogElement>(null);
+  const nameInput = useRef<HTMLInputElement>(null);
   const id = useId();
   const [name, setName] = useState("");
   const [error, setError] = useState<string>();
@@ -26,21 +27,17 @@ export function SaveLayoutButton({ kind, query, signedIn }: { kind: CalculatorKi
     event.preventDefault();
     setSaving(true);
     setError(undefined);
-    try {
-      const res = await fetch("/api/layouts", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ kind, name, params: query }) });
-      if (!res.ok) {
-        const body = (await res.json().catch(() => null)) as ErrorBody | null;
-        setError(body?.error.fields?.name ?? body?.error.message ?? "Could not save the layout. Try again.");
-        return;
-      }
-      setSaved(name.trim());
-      dialog.current?.close();
-      setName("");
-    } catch {
-      setError("Could not reach Sixteenths. Check your connection and try again.");
-    } finally {
-      setSaving(false);
+    const result = await callApi("/api/layouts", "POST", { kind, name, params: query });
+    setSaving(false);
+    if (!result.ok) {
+      // The name is the only thing typed here, so every refusal is shown beside it.
+      setError(result.fields.name ?? result.message);
+      nameInput.current?.focus();
+      return;
     }
+    setSaved(name.trim());
+    dialog.current?.close();
+    setName("");
   };
 
   return (
@@ -63,6 +60,7 @@ export function SaveLayoutButton({ kind, query, signedIn }: { kind: CalculatorKi
               Name
             </label>
             <input
+              ref={nameInput}
               id={`${id}-name`}
               className="input"
               value={name}

@@ -10,25 +10,25 @@ import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 
 /** For a visitor without an account: name and password make a student account, then sign in. */
 export function AcceptWithNewAccount({ token, email, name }: { token: string; email: string; name: string }) {
   const hydrated = useHydrated();
-  const [formError, setFormError] = useState<string>();
   const {
     register,
     handleSubmit,
     setError,
+    setFocus,
     formState: { errors, isSubmitting },
   } = useForm<AcceptNewAccountInput>({ resolver: zodResolver(acceptNewAccountSchema), defaultValues: { name, password: "" } });
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, ["name", "password"]);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(undefined);
     const result = await callApi(`/api/invitations/${token}/accept`, "POST", values);
     if (!result.ok) {
-      if (result.fields.name) setError("name", { message: result.fields.name });
-      if (result.fields.password) setError("password", { message: result.fields.password });
-      if (!result.fields.name && !result.fields.password) setFormError(result.message);
+      showFailure(result);
       return;
     }
     const signedIn = await signIn("credentials", { email, password: values.password, redirect: false });

@@ -9,6 +9,7 @@ import { Alert } from "@/components/ui/alert";
 import { TextField } from "@/components/ui/text-field";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { callApi } from "@/components/ui/call-api";
+import { useServerErrors } from "@/components/ui/use-server-form";
 
 type Props = { classId?: number; initial?: ClassFormInput };
 
@@ -18,18 +19,19 @@ const FIELDS = ["name", "term", "sectionCode", "program"] as const;
 export function ClassForm({ classId, initial }: Props) {
   const router = useRouter();
   const hydrated = useHydrated();
-  const [formError, setFormError] = useState<string>();
   const [saved, setSaved] = useState(false);
   const {
     register,
     handleSubmit,
     setError,
+    setFocus,
     formState: { errors, isSubmitting, isDirty },
     reset,
   } = useForm<ClassFormInput, unknown, ClassInput>({
     resolver: zodResolver(classSchema),
     defaultValues: initial ?? { name: "", term: "", sectionCode: "", program: "" },
   });
+  const { formError, setFormError, showFailure } = useServerErrors({ setError, setFocus }, FIELDS);
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(undefined);
@@ -38,10 +40,7 @@ export function ClassForm({ classId, initial }: Props) {
       ? await callApi<unknown>(`/api/classes/${classId}`, "PATCH", values)
       : await callApi<{ id: number }>("/api/classes", "POST", values);
     if (!result.ok) {
-      for (const [name, message] of Object.entries(result.fields)) {
-        if ((FIELDS as readonly string[]).includes(name)) setError(name as (typeof FIELDS)[number], { message });
-      }
-      if (Object.keys(result.fields).length === 0) setFormError(result.message);
+      showFailure(result);
       return;
     }
     if (classId) {

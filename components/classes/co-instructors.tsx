@@ -31,7 +31,7 @@ export function CoInstructors({ classId, lead, coInstructors, canManage }: { cla
     setAdded(undefined);
     const result = await callApi<{ coInstructor: Person }>(`/api/classes/${classId}/co-instructors`, "POST", values);
     if (!result.ok) {
-      setError("email", { message: result.fields.email ?? result.message });
+      setError("email", { message: result.fields.email ?? result.message }, { shouldFocus: true });
       return;
     }
     setAdded(`${result.data.coInstructor.name} now co-teaches this class.`);

@@ -32,7 +32,7 @@ export function InviteForm({ classId }: { classId: number }) {
     setFormError(undefined);
     const result = await callApi<{ batch: string; results: InviteOutcome[] }>(`/api/classes/${classId}/invitations`, "POST", values);
     if (!result.ok) {
-      if (result.fields.addresses) setError("addresses", { message: result.fields.addresses });
+      if (result.fields.addresses) setError("addresses", { message: result.fields.addresses }, { shouldFocus: true });
       else setFormError(result.message);
       return;
     }

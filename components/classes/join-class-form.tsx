@@ -27,7 +27,7 @@ export function JoinClassForm({ initialCode = "" }: { initialCode?: string }) {
     setJoined(undefined);
     const result = await callApi<Joined>("/api/classes/join", "POST", values);
     if (!result.ok) {
-      setError("code", { message: result.fields.code ?? result.message });
+      setError("code", { message: result.fields.code ?? result.message }, { shouldFocus: true });
       return;
     }
     setJoined(result.data.alreadyIn ? `You are already in ${result.data.className}.` : `You joined ${result.data.className}.`);

@@ -20,18 +20,29 @@ export function RosterImport({ classId }: { classId: number }) {
   const [stage, setStage] = useState<Stage>({ kind: "empty" });
   const [pasted, setPasted] = useState("");
   const [error, setError] = useState<string>();
+  // A problem with the file itself is shown beside the control it came from, which gets the focus.
+  const [inputError, setInputError] = useState<{ source: "file" | "paste"; message: string }>();
+  const refuse = (source: "file" | "paste", message: string) => {
+    setInputError({ source, message });
+    setStage({ kind: "empty" });
+    requestAnimationFrame(() => document.getElementById(`${id}-${source}`)?.focus());
+  };
 
-  const check = async (csv: string) => {
+  const check = async (csv: string, source: "file" | "paste") => {
     setError(undefined);
+    setInputError(undefined);
     if (!csv.trim()) {
-      setError("The roster is empty. Choose a CSV file or paste the rows.");
+      refuse(source, "The roster is empty. Choose a CSV file or paste the rows.");
       return;
     }
     setStage({ kind: "checking" });
     const result = await callApi<ImportPreview>(`/api/classes/${classId}/roster/import`, "POST", { csv, dryRun: true });
     if (!result.ok) {
-      setError(result.fields.csv ?? result.message);
-      setStage({ kind: "empty" });
+      refuse(source, result.fields.csv ?? result.message);
+      return;
+    }
+    if (result.data.fileError) {
+      refuse(source, result.data.fileError);
       return;
     }
     setStage({ kind: "preview", csv, preview: result.data });
@@ -40,11 +51,18 @@ export function RosterImport({ classId }: { classId: number }) {
   const onFile = async (file: File | undefined) => {
     if (!file) return;
     if (file.size > MAX_IMPORT_BYTES) {
-      setError(`${file.name} is over 1 MB. Split the roster into smaller files.`);
+      refuse("file", `${file.name} is over 1 MB. Split the roster into smaller files.`);
       return;
     }
-    await check(await file.text());
+    await check(await file.text(), "file");
   };
+  const fieldError = (source: "file" | "paste") =>
+    inputError?.source === source ? (
+      <p id={`${id}-${source}-error`} className="mt-1 text-sm font-semibold text-danger">
+        {inputError.message}
+      </p>
+    ) : null;
+  const describedBy = (source: "file" | "paste", hint?: string) => [hint, inputError?.source === source ? `${id}-${source}-error` : null].filter(Boolean).join(" ") || undefined;
 
   const send = async () => {
     if (stage.kind !== "preview") return;
@@ -64,6 +82,7 @@ export function RosterImport({ classId }: { classId: number }) {
     setStage({ kind: "empty" });
     setPasted("");
     setError(undefined);
+    setInputError(undefined);
   };
 
   if (stage.kind === "sent") {
@@ -100,10 +119,12 @@ export function RosterImport({ classId }: { classId: number }) {
               id={`${id}-file`}
               type="file"
               accept=".csv,text/csv,text/plain"
-              aria-describedby={`${id}-file-hint`}
+              aria-describedby={describedBy("file", `${id}-file-hint`)}
+              aria-invalid={inputError?.source === "file" ? true : undefined}
               className="block w-full text-sm file:mr-3 file:min-h-touch file:rounded file:border file:border-rule-strong file:bg-paper-raised file:px-4 file:font-semibold"
               onChange={(e) => onFile(e.currentTarget.files?.[0])}
             />
+            {fieldError("file")}
           </div>
           <div>
             <label htmlFor={`${id}-paste`} className="mb-1 block font-semibold">
@@ -116,9 +137,12 @@ export function RosterImport({ classId }: { classId: number }) {
               placeholder={"Name,E-mail\nAvery Castellanos,avery@example.com"}
               value={pasted}
               onChange={(e) => setPasted(e.target.value)}
+              aria-describedby={describedBy("paste")}
+              aria-invalid={inputError?.source === "paste" ? true : undefined}
             />
+            {fieldError("paste")}
           </div>
-          <button type="button" className="btn-quiet" onClick={() => check(pasted)}>
+          <button type="button" className="btn-quiet" onClick={() => check(pasted, "paste")}>
             {stage.kind === "checking" ? "Checking…" : "Check pasted rows"}
           </button>
         </fieldset>

@@ -5,6 +5,7 @@ import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/alert";
 import { callApi } from "@/components/ui/call-api";
+import { focusWhenReady } from "@/components/ui/use-server-form";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { TextField } from "@/components/ui/text-field";
 import { formToOverride, overrideFormSchema, type OverrideForm as FormValues } from "@/lib/gradebook/schemas";
@@ -34,7 +35,10 @@ export function OverrideForm({ path, studentName, possible, hasOverride, onSaved
     const result = await callApi(`${path}/override`, "POST", formToOverride(pending));
     setBusy(false);
     if (!result.ok) {
-      for (const [field, message] of Object.entries(result.fields)) if (field === "points" || field === "reason") form.setError(field, { message });
+      // The dialog closes on a field's refusal, so the message lands beside that field with the focus.
+      const onForm = Object.entries(result.fields).filter(([field]) => field === "points" || field === "reason") as ["points" | "reason", string][];
+      for (const [field, message] of onForm) form.setError(field, { type: "server", message });
+      if (onForm.length > 0) focusWhenReady(form.setFocus, onForm[0][0]);
       setError(result.message);
       if (Object.keys(result.fields).length > 0) setPending(null);
       return;

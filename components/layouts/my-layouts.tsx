@@ -6,6 +6,7 @@ import useSWR from "swr";
 import type { ErrorBody } from "@/lib/errors";
 import type { SavedLayoutView } from "@/lib/layouts/saved";
 import { Alert } from "@/components/ui/alert";
+import { callApi } from "@/components/ui/call-api";
 
 async function fetchJson<T>(url: string): Promise<T> {
   const res = await fetch(url);
@@ -13,16 +14,6 @@ async function fetchJson<T>(url: string): Promise<T> {
   return res.json();
 }
 
-async function send(url: string, init: RequestInit): Promise<string | null> {
-  try {
-    const res = await fetch(url, { ...init, headers: { "content-type": "application/json" } });
-    if (res.ok) return null;
-    const body = (await res.json().catch(() => null)) as ErrorBody | null;
-    return body?.error.fields?.name ?? body?.error.message ?? "That did not work. Try again.";
-  } catch {
-    return "Could not reach Sixteenths. Check your connection and try again.";
-  }
-}
 
 export function MyLayouts() {
   const { data, error, isLoading, mutate } = useSWR<{ layouts: SavedLayoutView[] }>("/api/layouts", fetchJson);
@@ -33,15 +24,16 @@ export function MyLayouts() {
   const layouts = data?.layouts ?? [];
 
   const rename = async (layout: SavedLayoutView, name: string) => {
-    const problem = await send(`/api/layouts/${layout.id}`, { method: "PATCH", body: JSON.stringify({ name }) });
-    setMessage(problem ? { tone: "error", text: problem } : { tone: "success", text: `Renamed to “${name.trim()}”.` });
+    const result = await callApi(`/api/layouts/${layout.id}`, "PATCH", { name });
+    if (!result.ok) return result.fields.name ?? result.message;
+    setMessage({ tone: "success", text: `Renamed to “${name.trim()}”.` });
     await mutate();
-    return problem === null;
+    return null;
   };
   const remove = async (layout: SavedLayoutView) => {
     if (!window.confirm(`Delete the layout “${layout.name}”? This cannot be undone.`)) return;
-    const problem = await send(`/api/layouts/${layout.id}`, { method: "DELETE" });
-    setMessage(problem ? { tone: "error", text: problem } : { tone: "success", text: `Deleted “${layout.name}”.` });
+    const result = await callApi(`/api/layouts/${layout.id}`, "DELETE");
+    setMessage(result.ok ? { tone: "success", text: `Deleted “${layout.name}”.` } : { tone: "error", text: result.message });
     await mutate();
   };
 
@@ -72,12 +64,15 @@ function LayoutRow({
   onDelete,
 }: {
   layout: SavedLayoutView;
-  onRename: (layout: SavedLayoutView, name: string) => Promise<boolean>;
+  /** Resolves to the server's refusal, or null once renamed. */
+  onRename: (layout: SavedLayoutView, name: string) => Promise<string | null>;
   onDelete: (layout: SavedLayoutView) => Promise<void>;
 }) {
   const [editing, setEditing] = useState(false);
   const [name, setName] = useState(layout.name);
+  const [error, setError] = useState<string>();
   const inputId = `rename-${layout.id}`;
+  const errorId = `${inputId}-error`;
   return (
     <li className="card flex flex-wrap items-center justify-between gap-3 p-4">
       {editing ? (
@@ -85,19 +80,36 @@ function LayoutRow({
           className="flex flex-1 flex-wrap items-end gap-2"
           onSubmit={async (e) => {
             e.preventDefault();
-            if (await onRename(layout, name)) setEditing(false);
+            const problem = await onRename(layout, name);
+            setError(problem ?? undefined);
+            if (problem === null) setEditing(false);
+            else document.getElementById(inputId)?.focus();
           }}
         >
           <div className="min-w-48 flex-1">
             <label htmlFor={inputId} className="mb-1 block text-sm font-semibold">
               New name
             </label>
-            <input id={inputId} className="input" value={name} maxLength={120} onChange={(e) => setName(e.target.value)} autoFocus />
+            <input
+              id={inputId}
+              className="input"
+              value={name}
+              maxLength={120}
+              onChange={(e) => setName(e.target.value)}
+              aria-invalid={error ? true : undefined}
+              aria-describedby={error ? errorId : undefined}
+              autoFocus
+            />
+            {error ? (
+              <p id={errorId} className="mt-1 text-sm font-semibold text-danger">
+                {error}
+              </p>
+            ) : null}
           </div>
           <button type="submit" className="btn-primary">
             Save name
           </button>
-          <button type="button" className="btn-quiet" onClick={() => (setEditing(false), setName(layout.name))}>
+          <button type="button" className="btn-quiet" onClick={() => (setEditing(false), setName(layout.name), setError(undefined))}>
             Cancel
           </button>
         </form>

@@ -8,6 +8,7 @@ import type { ProblemUpdate, ProblemView } from "@/lib/practice/view";
 import { Alert } from "@/components/ui/alert";
 import { LocalTime } from "@/components/ui/local-time";
 import { useHydrated } from "@/components/ui/use-hydrated";
+import { focusFirstInvalid } from "@/components/ui/use-server-form";
 import { AnswerField } from "./answer-field";
 import { PreviousTries } from "./previous-tries";
 import { ProblemFigureView } from "./problem-figure";
@@ -23,6 +24,11 @@ type Props = {
   signedIn: boolean;
   headingLevel?: "h1" | "h2" | "h3";
 } & ({ assignment?: undefined; /** Called for "Another problem"; the standalone page navigates, a lesson swaps in place. */ onAnother: (problem: ProblemView) => void } | { assignment: AssignmentMode; onAnother?: undefined });
+
+/** The schema names a refused answer `answers.<part>`, the grader names it `<part>`; each box shows either. */
+function partErrors(fields: Record<string, string> | undefined): Record<string, string> {
+  return Object.fromEntries(Object.entries(fields ?? {}).map(([key, message]) => [key.replace(/^answers\./, ""), message]));
+}
 
 async function postJson<T>(url: string, body: unknown): Promise<{ ok: true; problem: T; late?: boolean } | { ok: false; error: ErrorBody["error"] }> {
   try {
@@ -53,6 +59,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
   const unanswered = useRef<{ signature: string; key: string; body: { answers: Record<string, string>; timeMs: number } } | null>(null);
   const started = useRef(0);
   const solutionRef = useRef<HTMLHeadingElement>(null);
+  const answersForm = useRef<HTMLFormElement>(null);
   // An assignment problem also stops taking answers when the student's window closes.
   const final = assignment ? problem.accepting === false : problem.status !== "open";
   const Heading = headingLevel;
@@ -80,8 +87,9 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
     if (!result.ok) {
       // A refusal stored nothing, so the next send is a new submission; a lost reply keeps its key.
       if (!result.retryable) unanswered.current = null;
-      setFieldErrors(result.error.fields ?? {});
+      setFieldErrors(partErrors(result.error.fields));
       setFormError(result.error.message);
+      focusFirstInvalid(() => answersForm.current);
       return;
     }
     unanswered.current = null;
@@ -125,7 +133,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
         {problem.figure ? <ProblemFigureView figure={problem.figure} /> : null}
       </div>
 
-      <form onSubmit={submit} noValidate className="space-y-4" aria-label="Your answers">
+      <form ref={answersForm} onSubmit={submit} noValidate className="space-y-4" aria-label="Your answers">
         <fieldset disabled={!hydrated || busy} className="min-w-0 space-y-4">
           <legend className="sr-only">Your answers</legend>
           {problem.parts.map((part) => (

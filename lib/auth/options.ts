@@ -36,6 +36,17 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    // next-auth's default builds a URL from the callback address unguarded, so `http://[` or `%`
+    // was a 500. The same rule without the throw: our own paths and our own origin, else home.
+    async redirect({ url, baseUrl }) {
+      if (url.startsWith("/")) return `${baseUrl}${url}`;
+      try {
+        if (new URL(url).origin === baseUrl) return url;
+      } catch {
+        // not an address at all
+      }
+      return baseUrl;
+    },
     async jwt({ token, user }) {
       if (user) {
         token.uid = Number(user.id);

@@ -18,10 +18,15 @@ export function signInLimitKey(email: string, headers: Headers | Record<string, 
 export async function signInRefusal(req: Request): Promise<Response | null> {
   let email = "";
   try {
-    const form = await req.clone().formData();
-    email = String(form.get("email") ?? "");
+    // next-auth takes the credentials as a form or as JSON; both are counted.
+    if (req.headers.get("content-type")?.includes("application/json")) {
+      const body = (await req.clone().json()) as { email?: unknown };
+      email = typeof body?.email === "string" ? body.email : "";
+    } else {
+      email = String((await req.clone().formData()).get("email") ?? "");
+    }
   } catch {
-    return null; // not a form post: next-auth answers it
+    return null; // no readable body: next-auth answers it
   }
   try {
     await consume("signIn", signInLimitKey(email, req.headers));
