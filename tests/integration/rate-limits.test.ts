@@ -65,7 +65,7 @@ const count = (model: "User" | "PasswordReset" | "EmailOutbox" | "Invitation" | 
   withDatabase(app.databasePath, (db) => (db.models[model] as unknown as { count: (o: object) => Promise<number> }).count({ where }));
 
 /** The browser's sign-in: a CSRF token, then the credentials callback (JSON mode, as next-auth's client asks). */
-async function signInPost(email: string, password: string, ip: string): Promise<Response> {
+async function signInPost(email: string, password: string, ip: string, as: "form" | "json" = "form"): Promise<Response> {
   const csrf = await fetch(`${app.url}/api/auth/csrf`);
   const { csrfToken } = (await csrf.json()) as { csrfToken: string };
   const cookie = csrf.headers
@@ -75,8 +75,8 @@ async function signInPost(email: string, password: string, ip: string): Promise<
   return fetch(`${app.url}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie, "x-forwarded-for": ip },
-    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
+    headers: { "content-type": as === "json" ? "application/json" : "application/x-www-form-urlencoded", cookie, "x-forwarded-for": ip },
+    body: as === "json" ? JSON.stringify({ csrfToken, email, password, json: "true" }) : new URLSearchParams({ csrfToken, email, password, json: "true" }),
   });
 }
 
@@ -94,6 +94,8 @@ describe("rate limits", () => {
     const body = (await expectRateLimited(refused)) as unknown as { url: string; error: { message: string } };
     // next-auth's client takes the message from the url's `error`, which the sign-in page shows.
     expect(new URL(body.url).searchParams.get("error")).toBe(body.error.message);
+    // next-auth also takes the credentials as JSON: those tries are counted and refused alike.
+    await expectRateLimited(await signInPost(dana.email, FIXTURE_PASSWORD, ip, "json"));
     // Another address (the school's other lab) is not locked out by this one.
     expect(await signInCookie(app.url, dana.email, FIXTURE_PASSWORD)).toBeTruthy();
   });
