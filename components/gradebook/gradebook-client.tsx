@@ -1,14 +1,19 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import dynamic from "next/dynamic";
+import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { Alert } from "@/components/ui/alert";
 import { callApi } from "@/components/ui/call-api";
 import type { Gradebook } from "@/lib/gradebook/types";
 import { FlagLegend } from "./cell-badges";
-import { DrillDownPanel } from "./drill-down-panel";
 import { GradeTable } from "./grade-table";
 import { StudentCards } from "./student-cards";
+
+// The drill-down (its review, photos and the override form with its validation) opens only on a
+// click, so it is not part of the gradebook's first load; it is fetched once the page is up.
+const loadDrillDown = () => import("./drill-down-panel").then((m) => m.DrillDownPanel);
+const DrillDownPanel = dynamic(loadDrillDown, { ssr: false });
 
 async function fetchGradebook(url: string): Promise<Gradebook> {
   const result = await callApi<{ gradebook: Gradebook }>(url, "GET");
@@ -24,6 +29,9 @@ export function GradebookClient({ initial }: { initial: Gradebook }) {
   const { data = initial, error, mutate, isValidating } = useSWR(url, fetchGradebook, { fallbackData: initial, revalidateOnMount: false });
   const [filters, setFilters] = useState<Filters>({ search: "", late: false, missing: false, below: "" });
   const [open, setOpen] = useState<{ assignmentId: number; studentId: number } | null>(null);
+  useEffect(() => {
+    void loadDrillDown().catch(() => undefined);
+  }, []);
   const below = filters.below.trim() === "" ? null : Number(filters.below);
   const belowInvalid = below !== null && (!Number.isFinite(below) || below < 0 || below > 100);
 
