@@ -6,6 +6,7 @@
  *   npm run bench:pages -- --runs 5 --why              # more runs; name what costs each page time
  *   npm run bench:pages -- --only lesson,gradebook     # some of the pages
  *   npm run bench:pages -- --strict                    # exit 1 when a page misses a target
+ *   NEXT_DIST_DIR=.next-old npm run bench:pages        # another build, e.g. before a change
  *
  * Slow (a minute or more a page), so `npm run bench` leaves it out. It starts the built app on a fresh
  * demo database (tests/support/app-server.ts), signs in over HTTP like the sign-in form, and hands the
