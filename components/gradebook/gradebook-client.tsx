@@ -1,7 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useEffect, useMemo, useState } from "react";
+import { useMemo, useState } from "react";
 import useSWR from "swr";
 import { Alert } from "@/components/ui/alert";
 import { callApi } from "@/components/ui/call-api";
@@ -11,8 +11,10 @@ import { GradeTable } from "./grade-table";
 import { StudentCards } from "./student-cards";
 
 // The drill-down (its review, photos and the override form with its validation) opens only on a
-// click, so it is not part of the gradebook's first load; it is fetched once the page is up.
+// click or Enter, so it is not part of the gradebook's first load: it is fetched as soon as the
+// pointer or the focus comes into the gradebook, a moment before it is asked for.
 const loadDrillDown = () => import("./drill-down-panel").then((m) => m.DrillDownPanel);
+const prefetchDrillDown = () => void loadDrillDown().catch(() => undefined);
 const DrillDownPanel = dynamic(loadDrillDown, { ssr: false });
 
 async function fetchGradebook(url: string): Promise<Gradebook> {
@@ -29,9 +31,6 @@ export function GradebookClient({ initial }: { initial: Gradebook }) {
   const { data = initial, error, mutate, isValidating } = useSWR(url, fetchGradebook, { fallbackData: initial, revalidateOnMount: false });
   const [filters, setFilters] = useState<Filters>({ search: "", late: false, missing: false, below: "" });
   const [open, setOpen] = useState<{ assignmentId: number; studentId: number } | null>(null);
-  useEffect(() => {
-    void loadDrillDown().catch(() => undefined);
-  }, []);
   const below = filters.below.trim() === "" ? null : Number(filters.below);
   const belowInvalid = below !== null && (!Number.isFinite(below) || below < 0 || below > 100);
 
@@ -66,7 +65,7 @@ export function GradebookClient({ initial }: { initial: Gradebook }) {
   }
 
   return (
-    <div className="space-y-4">
+    <div className="space-y-4" onPointerOver={prefetchDrillDown} onFocus={prefetchDrillDown}>
       <div className="flex flex-wrap items-end justify-between gap-3" data-chrome>
         <form role="search" className="flex flex-wrap items-end gap-3" onSubmit={(e) => e.preventDefault()} aria-label="Filter the gradebook">
           <div>
