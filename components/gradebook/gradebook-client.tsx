@@ -1,14 +1,21 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
 import { Alert } from "@/components/ui/alert";
 import { callApi } from "@/components/ui/call-api";
 import type { Gradebook } from "@/lib/gradebook/types";
 import { FlagLegend } from "./cell-badges";
-import { DrillDownPanel } from "./drill-down-panel";
 import { GradeTable } from "./grade-table";
 import { StudentCards } from "./student-cards";
+
+// The drill-down (its review, photos and the override form with its validation) opens only on a
+// click or Enter, so it is not part of the gradebook's first load: it is fetched as soon as the
+// pointer or the focus comes into the gradebook, a moment before it is asked for.
+const loadDrillDown = () => import("./drill-down-panel").then((m) => m.DrillDownPanel);
+const prefetchDrillDown = () => void loadDrillDown().catch(() => undefined);
+const DrillDownPanel = dynamic(loadDrillDown, { ssr: false });
 
 async function fetchGradebook(url: string): Promise<Gradebook> {
   const result = await callApi<{ gradebook: Gradebook }>(url, "GET");
@@ -58,7 +65,7 @@ export function GradebookClient({ initial }: { initial: Gradebook }) {
   }
 
   return (
-    <div className="space-y-4">
+    <div className="space-y-4" onPointerOver={prefetchDrillDown} onFocus={prefetchDrillDown}>
       <div className="flex flex-wrap items-end justify-between gap-3" data-chrome>
         <form role="search" className="flex flex-wrap items-end gap-3" onSubmit={(e) => e.preventDefault()} aria-label="Filter the gradebook">
           <div>

@@ -1,10 +1,15 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import type { ProblemView } from "@/lib/practice/view";
 import { useCurrentUser } from "@/components/shell/use-current-user";
-import { ProblemWorkspace } from "./problem-workspace";
 import { startProblem } from "./start-button";
+
+// The workspace (answer reader, grader's words, figures) is only shown after a click, so it stays out
+// of every lesson's first load; the click fetches its chunk alongside the new problem.
+const loadWorkspace = () => import("./problem-workspace").then((m) => m.ProblemWorkspace);
+const ProblemWorkspace = dynamic(loadWorkspace, { ssr: false });
 
 /**
  * A live problem inside a lesson. The lesson page is static, so the problem is only created
@@ -32,7 +37,7 @@ export function LessonPractice({ skill, title }: { skill: string; title: string 
         disabled={state.busy}
         onClick={async () => {
           setState({ busy: true });
-          const result = await startProblem({ skill });
+          const [result] = await Promise.all([startProblem({ skill }), loadWorkspace().catch(() => undefined)]);
           if (!result.ok) return setState({ busy: false, error: result.message });
           setProblem(result.problem);
           setState({ busy: false });

@@ -1,9 +1,14 @@
 "use client";
 
 import Link from "next/link";
-import { signOut } from "next-auth/react";
 import { useEffect, useRef } from "react";
 import type { SessionUser } from "@/lib/auth/roles";
+
+// The header is on every page; next-auth's browser client is fetched only when someone signs out.
+async function signOutToHome() {
+  const { signOut } = await import("next-auth/react");
+  await signOut({ callbackUrl: "/" });
+}
 
 const ROLE_LABEL = { student: "Student", instructor: "Instructor", admin: "Program admin" } as const;
 
@@ -53,7 +58,7 @@ export function UserMenu({ user }: { user: SessionUser }) {
         <Link href="/layouts" className="btn-quiet mt-3 w-full">
           My layouts
         </Link>
-        <button type="button" className="btn-quiet mt-2 w-full" onClick={() => signOut({ callbackUrl: "/" })}>
+        <button type="button" className="btn-quiet mt-2 w-full" onClick={signOutToHome}>
           Sign out
         </button>
       </div>
