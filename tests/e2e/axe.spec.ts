@@ -179,7 +179,7 @@ test("every page file has a row in this table", () => {
 
 for (const role of EVERYONE) {
   const rows = ROWS.filter((r) => r.roles.includes(role) && r.route !== "/practice/[id]");
-  test(`every page ${role === "anonymous" ? "a visitor" : `a ${role}`} can open (${rows.length} routes)`, async ({ browser }) => {
+  test(`every page ${role === "anonymous" ? "a visitor" : `${/^[aeiou]/.test(role) ? "an" : "a"} ${role}`} can open (${rows.length} routes)`, async ({ browser }) => {
     test.setTimeout(240_000);
     const { context, page } = await open(browser, role);
     // Every page is checked before failing, so one run lists all that needs fixing.
@@ -249,7 +249,7 @@ test.describe("states that appear after something is done", () => {
   test("the gradebook with one student's work open, and a confirm dialog", async ({ browser }) => {
     const { context, page } = await open(browser, "instructor");
     await visit(page, `${cls()}/gradebook`);
-    await page.getByRole("grid").getByRole("button", { name: /Open the work$/ }).first().click();
+    await page.getByRole("grid").getByRole("button", { name: /submitted\. Open the work$/ }).first().click();
     const panel = page.locator("dialog[data-drill-down]");
     await expect(panel.locator("#drill-heading")).not.toHaveText("Loading the work…");
     await expect(panel.locator("article[data-problem]").first()).toBeVisible();
