@@ -43,7 +43,8 @@ const asg = () => `${cls()}/assignments/${ids.assignmentId}`;
 
 // One row per page file; the first test below fails when a page has no row. A public page is
 // checked for the signed-in roles only where it shows them something different (the header by
-// role on "/", mastery on the practice pages, lesson progress), which keeps the file quick.
+// role on "/", mastery on the practice pages, lesson progress), and an admin sees the teaching
+// pages as an instructor does, so only the ones that differ for them are checked again.
 const ROWS: Row[] = [
   { route: "/", roles: EVERYONE, paths: one(() => "/") },
   { route: "/safety", roles: ["anonymous"], paths: one(() => "/safety") },
@@ -54,7 +55,7 @@ const ROWS: Row[] = [
   { route: "/invite/[token]", roles: ["anonymous"], paths: () => [`/invite/${ids.inviteToken}`, "/invite/not-a-real-link"] },
   { route: "/lessons", roles: ["anonymous", "student"], paths: one(() => "/lessons") },
   { route: "/lessons/[slug]", roles: ["anonymous"], paths: () => LESSONS.map((s) => `/lessons/${s}`) },
-  { route: "/lessons/[slug]", roles: ["student", "instructor"], paths: () => [`/lessons/${LESSONS[3]}`] },
+  { route: "/lessons/[slug]", roles: ["student"], paths: () => [`/lessons/${LESSONS[3]}`] },
   { route: "/calculators", roles: ["anonymous"], paths: one(() => "/calculators") },
   ...CALCULATORS.map((c): Row => ({ route: `/calculators/${c}`, roles: ["anonymous"], paths: one(() => `/calculators/${c}`) })),
   // Signed in, a calculator adds saving the layout.
@@ -67,16 +68,16 @@ const ROWS: Row[] = [
   { route: "/my-classes/[classId]/assignments/[assignmentId]", roles: ["student"], paths: one(() => `/my-classes/${ids.classId}/assignments/${ids.assignmentId}`) },
   { route: "/my-progress", roles: LEARNING, paths: one(() => "/my-progress") },
   { route: "/classes", roles: TEACHING, paths: one(() => "/classes") },
-  { route: "/classes/new", roles: TEACHING, paths: one(() => "/classes/new") },
+  { route: "/classes/new", roles: ["instructor"], paths: one(() => "/classes/new") },
   { route: "/classes/[classId]", roles: TEACHING, paths: one(cls) },
-  { route: "/classes/[classId]/add-students", roles: TEACHING, paths: one(() => `${cls()}/add-students`) },
-  { route: "/classes/[classId]/join-code", roles: TEACHING, paths: one(() => `${cls()}/join-code`) },
+  { route: "/classes/[classId]/add-students", roles: ["instructor"], paths: one(() => `${cls()}/add-students`) },
+  { route: "/classes/[classId]/join-code", roles: ["instructor"], paths: one(() => `${cls()}/join-code`) },
   { route: "/classes/[classId]/settings", roles: TEACHING, paths: one(() => `${cls()}/settings`) },
-  { route: "/classes/[classId]/gradebook", roles: TEACHING, paths: one(() => `${cls()}/gradebook`) },
-  { route: "/classes/[classId]/progress", roles: TEACHING, paths: one(() => `${cls()}/progress`) },
-  { route: "/classes/[classId]/assignments", roles: TEACHING, paths: one(() => `${cls()}/assignments`) },
-  { route: "/classes/[classId]/assignments/new", roles: TEACHING, paths: one(() => `${cls()}/assignments/new`) },
-  { route: "/classes/[classId]/assignments/[assignmentId]", roles: TEACHING, paths: one(asg) },
+  { route: "/classes/[classId]/gradebook", roles: ["instructor"], paths: one(() => `${cls()}/gradebook`) },
+  { route: "/classes/[classId]/progress", roles: ["instructor"], paths: one(() => `${cls()}/progress`) },
+  { route: "/classes/[classId]/assignments", roles: ["instructor"], paths: one(() => `${cls()}/assignments`) },
+  { route: "/classes/[classId]/assignments/new", roles: ["instructor"], paths: one(() => `${cls()}/assignments/new`) },
+  { route: "/classes/[classId]/assignments/[assignmentId]", roles: ["instructor"], paths: one(asg) },
   { route: "/classes/[classId]/assignments/[assignmentId]/edit", roles: ["instructor"], paths: one(() => `${asg()}/edit`) },
   { route: "/classes/[classId]/assignments/[assignmentId]/students", roles: ["instructor"], paths: one(() => `${asg()}/students`) },
   { route: "/classes/[classId]/assignments/[assignmentId]/students/[studentId]", roles: ["instructor"], paths: one(() => `${asg()}/students/${ids.studentId}`) },
