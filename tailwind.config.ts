@@ -20,6 +20,8 @@ const config: Config = {
         rule: {
           DEFAULT: "#d6cfbf",
           strong: "#a9a08c",
+          // The edge of a text box: 3:1 against the paper around it, so the box can be found (WCAG 1.4.11).
+          field: "#8a8170",
         },
         chalk: {
           DEFAULT: "#1f58a8",

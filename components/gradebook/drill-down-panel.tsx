@@ -31,7 +31,13 @@ export function DrillDownPanel({ classId, assignmentId, studentId, cell, onClose
   const { data, error, isLoading, mutate } = useSWR(path, fetchDrillDown);
   useEffect(() => {
     const dialog = ref.current;
+    const opener = document.activeElement instanceof HTMLElement ? document.activeElement : null;
     if (dialog && !dialog.open) dialog.showModal();
+    // The panel is unmounted while open, and then the browser does not hand focus back: give it
+    // back to the cell that opened it, so a keyboard user carries on where they were.
+    return () => {
+      if (opener?.isConnected) opener.focus();
+    };
   }, []);
   const review = data?.review;
 

@@ -1,4 +1,5 @@
 import type { TryView } from "@/lib/assignments/work";
+import { ClockMark } from "@/components/assignments/student-status-badge";
 import { LocalTime } from "@/components/ui/local-time";
 
 const VERDICT = { correct: "right", imprecise: "close", incorrect: "not right" } as const;
@@ -17,8 +18,9 @@ export function PreviousTries({ tries, showSlips = false }: { tries: TryView[]; 
               <LocalTime iso={t.at} />
             </span>
             {t.late ? (
-              <span className="rounded-sm border border-caution-edge bg-caution-bg px-1.5 text-xs text-caution">
-                <span aria-hidden="true">⏱ </span>late
+              <span className="inline-flex items-center gap-1 rounded-sm border border-caution-edge bg-caution-bg px-1.5 text-xs text-caution">
+                <ClockMark />
+                late
               </span>
             ) : null}
           </p>

@@ -60,10 +60,18 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
   const started = useRef(0);
   const solutionRef = useRef<HTMLHeadingElement>(null);
   const answersForm = useRef<HTMLFormElement>(null);
+  const focusSolution = useRef(false);
   // An assignment problem also stops taking answers when the student's window closes.
   const final = assignment ? problem.accepting === false : problem.status !== "open";
   const Heading = headingLevel;
   const SubHeading = headingLevel === "h1" ? "h2" : headingLevel === "h2" ? "h3" : "h4";
+
+  // After the render that shows the worked solution, not on a timer that can run before it.
+  useEffect(() => {
+    if (!focusSolution.current) return;
+    focusSolution.current = false;
+    solutionRef.current?.focus();
+  }, [problem]);
 
   useEffect(() => {
     started.current = Date.now();
@@ -97,7 +105,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
     setProblem((current) => ({ ...current, ...result.problem }));
     setLateNote(result.late === true);
     assignment?.onAnswered({ late: result.late === true });
-    if (result.problem.final) requestAnimationFrame(() => solutionRef.current?.focus());
+    focusSolution.current = Boolean(result.problem.final);
   };
 
   const another = async () => {
