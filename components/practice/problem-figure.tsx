@@ -12,7 +12,10 @@ const TONES: Record<ProblemFigure["rects"][number]["tone"], string> = {
   highlight: "fill-chalk stroke-chalk-dark",
 };
 
-/** The prompt's drawing, scaled to fit; dimension strings are drawn like the calculators'. */
+/**
+ * The prompt's drawing, scaled to fit; dimension strings are drawn like the calculators'. A sketch
+ * says it is not to scale, so nobody tries to measure it (its proportions are made up on purpose).
+ */
 export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
   // Several drawings share a page (a printed worksheet, a student's review), so each needs its own id.
   const descriptionId = useId();
@@ -22,7 +25,7 @@ export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
   const top = Math.min(0, ...dimY) - font * 1.6 - pad;
   const bottom = Math.max(figure.height, ...dimY) + pad;
   const stroke = Math.max(figure.width / 600, 0.15);
-  return (
+  const drawing = (
     <svg role="img" aria-labelledby={descriptionId} viewBox={`${-pad} ${top} ${figure.width + 2 * pad} ${bottom - top}`} className="h-auto max-h-80 w-full" data-problem-figure>
       <desc id={descriptionId}>{figure.description}</desc>
       {figure.rects.map((r, i) => (
@@ -50,5 +53,12 @@ export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
         );
       })}
     </svg>
+  );
+  if (!figure.schematic) return drawing;
+  return (
+    <figure>
+      {drawing}
+      <figcaption className="mt-1 text-right text-xs text-ink-soft">Not to scale</figcaption>
+    </figure>
   );
 }
