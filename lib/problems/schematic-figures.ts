@@ -6,7 +6,11 @@ import type { Fraction } from "@/lib/layout";
 import { roundedAnswer } from "./kit";
 import type { ProblemFigure, ProblemPart } from "./types";
 
-/** Drawn widths of a member and of a space, in drawing units (not inches). */
+/**
+ * Drawn widths of a member and of a space, in drawing units (not inches). Units are small enough
+ * that every number in a sketch, and every number the view derives from it, can be whole (a decimal
+ * in the page could read as a decimal answer), and odd enough that distances are rarely round.
+ */
 type Proportion = { member: number; space: number };
 
 /**
@@ -14,7 +18,9 @@ type Proportion = { member: number; space: number };
  * chance; when one of them lands on an answer the next proportion is drawn instead. The first one
  * is clear for most problems, and a student cannot tell which were passed over.
  */
-const PROPORTIONS: readonly Proportion[] = [12, 14, 11, 13, 15, 10, 16, 9, 17, 18].flatMap((space) => [4, 5, 3, 6].map((member) => ({ member, space })));
+const PROPORTIONS: readonly Proportion[] = [123, 141, 109, 133, 151, 97, 162, 89, 171, 183].flatMap((space) =>
+  [41, 53, 37, 59].map((member) => ({ member, space })),
+);
 
 /** Closer than this to an answer, a number in the drawing reads as the answer (twice the 1/64" a reader could hope for). */
 const MARGIN = 1 / 32;
@@ -79,7 +85,10 @@ function firstClear(draw: (p: Proportion, members: boolean) => ProblemFigure, gi
 }
 
 /** Dimension strings sit a few text heights apart; the view sizes its text from the drawing's width. */
-const rowStep = (width: number) => Math.max(8, Math.round(width / 12));
+const rowStep = (width: number) => tens(Math.max(80, width / 12));
+
+/** Up to a whole ten of drawing units. */
+const tens = (value: number) => Math.round(value / 10) * 10;
 
 export type SpacingSketch = {
   description: string;
@@ -101,11 +110,11 @@ export type SpacingSketch = {
 export function spacingSketch(options: SpacingSketch): ProblemFigure {
   const show = (options.show ?? true) && options.count > 0;
   const draw = ({ member, space }: Proportion, members: boolean): ProblemFigure => {
-    const post = options.endCondition === "gaps" ? member + 2 : 0;
+    const post = options.endCondition === "gaps" ? member + 20 : 0;
     const spaces = options.endCondition === "members" ? options.count - 1 : options.count + 1;
     const span = members ? options.count * member + spaces * space : 10 * space;
     const width = span + 2 * post;
-    const height = Math.round(Math.max(24, Math.min(60, width / 3)));
+    const height = tens(Math.max(240, Math.min(600, width / 3)));
     const firstStart = post + (options.endCondition === "members" ? 0 : space);
     const startOf = (i: number) => firstStart + (i - 1) * (member + space);
     const rects: ProblemFigure["rects"] = [];
@@ -144,19 +153,21 @@ export type WallSketch = {
 export function wallSketch(options: WallSketch): ProblemFigure {
   const draw = ({ member, space }: Proportion, verticals: boolean): ProblemFigure => {
     const width = options.verticals * member + (options.verticals - 1) * space;
-    const wallHeight = Math.round(Math.max(5 * space, width * 0.4));
-    const top = member + 2;
-    const trim = options.hasBaseTrim ? member + 1 : 0;
-    const bottomTop = wallHeight - trim - (member + 1);
+    const top = member + 20;
+    const bottom = member + 10;
+    const trim = options.hasBaseTrim ? member + 10 : 0;
+    // Whole panels between the row rails, so the wall's height follows from them.
+    const panel = Math.round((Math.max(5 * space, width * 0.4) - top - bottom - trim - options.rows * member) / (options.rows + 1));
+    const bottomTop = top + (options.rows + 1) * panel + options.rows * member;
+    const wallHeight = bottomTop + bottom + trim;
     const rects: ProblemFigure["rects"] = [];
     if (trim > 0) rects.push({ x: 0, y: wallHeight - trim, w: width, h: trim, tone: "trim", label: "base trim" });
-    rects.push({ x: 0, y: bottomTop, w: width, h: member + 1, tone: "rail", label: "bottom rail" }, { x: 0, y: 0, w: width, h: top, tone: "rail", label: "top rail" });
+    rects.push({ x: 0, y: bottomTop, w: width, h: bottom, tone: "rail", label: "bottom rail" }, { x: 0, y: 0, w: width, h: top, tone: "rail", label: "top rail" });
     if (verticals) {
       for (let i = 0; i < options.verticals; i++) {
         const asked = options.askVertical && i === 1;
         rects.push({ x: i * (member + space), y: top, w: member, h: bottomTop - top, tone: asked ? "highlight" : "member", ...(asked ? { label: "?" } : {}) });
       }
-      const panel = (bottomTop - top - options.rows * member) / (options.rows + 1);
       for (let r = 1; r <= options.rows; r++) {
         for (let i = 0; i + 1 < options.verticals; i++) {
           const asked = options.askBay && i === 0 && r === 1;

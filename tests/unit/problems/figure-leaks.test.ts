@@ -83,8 +83,12 @@ function leaks(kind: AnyProblemKind, seed: number, level: Level): string[] {
   const params = kind.generate(seed, level);
   const figure = kind.render(params as never).figure;
   if (!figure) return [];
-  const readings = figureReadings(figure, givenLengths(params as Record<string, unknown>));
   const found: string[] = [];
+  if (!figure.schematic) found.push(`${kind.key} seed ${seed} level ${level}: drawing not marked as a sketch`);
+  // A decimal anywhere in the page could read as a decimal answer; a sketch's numbers are whole.
+  const fractional = Object.values(coordinates(figure)).flat().filter((v) => !Number.isInteger(v));
+  if (fractional.length > 0) found.push(`${kind.key} seed ${seed} level ${level}: fractional drawing units ${fractional.slice(0, 3).join(", ")}`);
+  const readings = figureReadings(figure, givenLengths(params as Record<string, unknown>));
   for (const answer of answers(kind, params)) {
     const hit = readings.find((r) => Math.abs(r.value - answer.value) <= TOLERANCE);
     if (hit) found.push(`${kind.key} seed ${seed} level ${level}: ${answer.key} ${answer.value} read as ${hit.how}`);
