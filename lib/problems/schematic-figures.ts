@@ -18,8 +18,8 @@ type Proportion = { member: number; space: number };
  * chance; when one of them lands on an answer the next proportion is drawn instead. The first one
  * is clear for most problems, and a student cannot tell which were passed over.
  */
-const PROPORTIONS: readonly Proportion[] = [123, 141, 109, 133, 151, 97, 162, 89, 171, 183].flatMap((space) =>
-  [41, 53, 37, 59].map((member) => ({ member, space })),
+const PROPORTIONS: readonly Proportion[] = [123, 141, 109, 133, 151, 97, 162, 89, 171, 183, 201, 79, 223, 247].flatMap((space) =>
+  [41, 53, 37, 59, 71, 29].map((member) => ({ member, space })),
 );
 
 /** Closer than this to an answer, a number in the drawing reads as the answer (twice the 1/64" a reader could hope for). */
