@@ -22,7 +22,8 @@ export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
   // A sketch is drawn in whole units and stays whole here: no decimal on the page can read as a decimal answer.
   const at = (value: number) => (figure.schematic ? Math.round(value) : value);
   const pad = at(Math.max(figure.width, figure.height) * 0.04 + 2);
-  const font = at(Math.max(figure.width / 36, 2.2));
+  // A sketch's text is sized from its longer side, so a tall wall's labels stay readable on a phone.
+  const font = figure.schematic ? Math.round(Math.max(figure.width, figure.height) / 30) : Math.max(figure.width / 36, 2.2);
   const dimY = figure.dimensions.map((d) => d.y);
   const top = at(Math.min(0, ...dimY) - font * 1.6 - pad);
   const bottom = at(Math.max(figure.height, ...dimY) + pad);
@@ -34,7 +35,7 @@ export function ProblemFigureView({ figure }: { figure: ProblemFigure }) {
         <g key={i}>
           <rect x={r.x} y={r.y} width={Math.max(r.w, stroke)} height={Math.max(r.h, stroke)} strokeWidth={stroke} className={TONES[r.tone]} />
           {r.label ? (
-            <text x={at(r.x + r.w / 2)} y={at(r.y + r.h / 2)} fontSize={at(font * 0.8)} textAnchor="middle" dominantBaseline="middle" className="fill-ink font-mono" aria-hidden="true">
+            <text x={at(r.x + r.w / 2)} y={at(r.y + r.h / 2)} fontSize={at(font * 0.8)} textAnchor="middle" dominantBaseline="middle" className={r.tone === "highlight" ? "fill-paper font-mono font-bold" : "fill-ink font-mono"} aria-hidden="true">
               {r.label}
             </text>
           ) : null}

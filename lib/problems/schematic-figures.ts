@@ -119,6 +119,8 @@ export function spacingSketch(options: SpacingSketch): ProblemFigure {
     const startOf = (i: number) => firstStart + (i - 1) * (member + space);
     const rects: ProblemFigure["rects"] = [];
     if (post > 0) rects.push({ x: 0, y: 0, w: post, h: height, tone: "post" }, { x: post + span, y: 0, w: post, h: height, tone: "post" });
+    // Without members or posts a wall would be a bare dimension line: its outline shows where the span is.
+    else if (!members) rects.push({ x: 0, y: 0, w: span, h: height, tone: "stud" });
     if (members) {
       for (let i = 1; i <= options.count; i++) rects.push({ x: startOf(i), y: 0, w: member, h: height, tone: i === options.highlight ? "highlight" : "member" });
     }
@@ -157,7 +159,7 @@ export function wallSketch(options: WallSketch): ProblemFigure {
     const bottom = member + 10;
     const trim = options.hasBaseTrim ? member + 10 : 0;
     // Whole panels between the row rails, so the wall's height follows from them.
-    const panel = Math.round((Math.max(5 * space, width * 0.4) - top - bottom - trim - options.rows * member) / (options.rows + 1));
+    const panel = Math.round((Math.max(4 * space, width * 0.4) - top - bottom - trim - options.rows * member) / (options.rows + 1));
     const bottomTop = top + (options.rows + 1) * panel + options.rows * member;
     const wallHeight = bottomTop + bottom + trim;
     const rects: ProblemFigure["rects"] = [];
