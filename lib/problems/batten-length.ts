@@ -21,6 +21,7 @@ import {
   type Slip,
   type WallParams,
 } from "./spacing-figures";
+import { lengthAnswers } from "./schematic-figures";
 import type { Level, ProblemKind, ProblemPart } from "./types";
 
 export type BattenLengthParams = WallParams;
@@ -107,7 +108,7 @@ function render(p: BattenLengthParams) {
     `What is the total height taken by the base trim and the two rails, and what is the cut length of each vertical, ${nearestText(precisionFor(p.level))}?`;
   return {
     text,
-    figure: wallFigureFor(p, `A wall ${height} tall with base trim, a bottom rail and a top rail; the length of the verticals between the rails is asked.`, { vertical: true }),
+    figure: wallFigureFor(p, `A wall ${height} tall with base trim, a bottom rail and a top rail; the length of the verticals between the rails is asked.`, { vertical: true }, lengthAnswers(parts(p), solve(p))),
   };
 }
 

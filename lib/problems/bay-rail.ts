@@ -20,6 +20,7 @@ import {
   type Slip,
   type WallParams,
 } from "./spacing-figures";
+import { lengthAnswers } from "./schematic-figures";
 import type { Level, ProblemKind, ProblemPart } from "./types";
 
 export type BayRailParams = WallParams;
@@ -87,7 +88,7 @@ function render(p: BayRailParams) {
     `How many bays are there across the wall, and what is the bay width, which is the cut length of each horizontal rail, ${nearestText(precisionFor(p.level))}?`;
   return {
     text,
-    figure: wallFigureFor(p, `A grid wall ${width} wide with verticals flush at both ends and ${rows} of horizontal rails; the width of a bay is asked.`, { bay: true }),
+    figure: wallFigureFor(p, `A grid wall ${width} wide with verticals flush at both ends and ${rows} of horizontal rails; the width of a bay is asked.`, { bay: true }, lengthAnswers(parts(p), solve(p))),
   };
 }
 

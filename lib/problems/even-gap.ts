@@ -17,10 +17,10 @@ import {
   nearestText,
   redraw,
   slipsAreClear,
-  spacingFigure,
   type Nominal,
   type Slip,
 } from "./spacing-figures";
+import { lengthAnswers, spacingSketch } from "./schematic-figures";
 import type { Level, ProblemKind, ProblemPart } from "./types";
 
 export type EvenGapParams = {
@@ -112,22 +112,16 @@ function render(p: EvenGapParams) {
   const ask = `Work out the total width of the ${name}s, the free space left for gaps, the number of spaces and the clear gap between ${name}s, ${nearestText(precisionFor(p.level))}.`;
   return {
     text: `${setup}\n\n${ask}`,
-    figure: spacingFigure({
+    figure: spacingSketch({
       description: `${cap(countWord(p.count))} ${name}s across a span of ${givenText(p.span, p.level)}, ${p.endCondition === "members" ? "one flush at each end" : "between two posts"}; the gap between two of them is asked.`,
       span: p.span,
-      memberWidth: w,
       count: p.count,
       endCondition: p.endCondition,
       spanLabel: givenText(p.span, p.level),
-      dimensions: [gapDimension(p)],
+      ask: { gap: true },
+      answers: lengthAnswers(parts(p), solve(p)),
     }),
   };
-}
-
-function gapDimension(p: EvenGapParams) {
-  const r = layout(p);
-  const first = r.members[0];
-  return { x1: first.end, x2: first.end.add(r.gap), label: "?" };
 }
 
 function cap(text: string): string {

@@ -16,10 +16,10 @@ import {
   nearestText,
   redraw,
   slipsAreClear,
-  spacingFigure,
   type Nominal,
   type Slip,
 } from "./spacing-figures";
+import { lengthAnswers, spacingSketch } from "./schematic-figures";
 import type { Level, ProblemKind, ProblemPart } from "./types";
 
 export type FewestMembersParams = {
@@ -112,14 +112,14 @@ function render(p: FewestMembersParams) {
       : `A porch guard has a clear span of ${span} between two posts, face to face. It gets ${p.nominal} balusters (${inchText(w)} wide), evenly spaced with the same opening against each post as between the balusters. Every opening must be strictly less than ${inchText(p.maxGap)}, so that a sphere of that size cannot pass through.\n\nWhat is the fewest number of balusters, and what is the opening, ${nearest}?`;
   return {
     text,
-    figure: spacingFigure({
+    figure: spacingSketch({
       description: `A span of ${span} ${p.variant === "battens" ? "across a wall" : "between two posts"}; the ${memberName(p)}s are not drawn, since their number is asked.`,
       span: p.span,
-      memberWidth: w,
       count: 0,
       endCondition: p.variant === "battens" ? "members" : "gaps",
       spanLabel: span,
       show: false,
+      answers: lengthAnswers(parts(p), solve(p)),
     }),
   };
 }

@@ -18,10 +18,10 @@ import {
   ordinalWord,
   redraw,
   slipsAreClear,
-  spacingFigure,
   type Nominal,
   type Slip,
 } from "./spacing-figures";
+import { lengthAnswers, spacingSketch } from "./schematic-figures";
 import type { Level, ProblemKind, ProblemPart } from "./types";
 
 export type MarkPositionParams = {
@@ -125,18 +125,17 @@ function render(p: MarkPositionParams) {
       ? `${cap(article(span))} ${span} wall gets ${countWord(p.count)} ${p.nominal} battens (${inchText(w)} wide), one flush at each end of the wall, with equal gaps between them. You hook the tape on the left end of the wall and mark every batten from there.`
       : `${cap(countWord(p.count))} ${p.nominal} balusters (${inchText(w)} square) are spaced evenly between two posts ${span} apart, face to face, with the same opening against each post as between the balusters. You hook the tape on the face of the left post and mark every baluster from there.`;
   const ask = `Give the on-centre spacing, then the marks for the left edge and for the centre of the ${ordinalWord(p.index)} ${name} from the left, each ${nearestText(precisionFor(p.level))}.`;
-  const r = layout(p);
   return {
     text: `${setup}\n\n${ask}`,
-    figure: spacingFigure({
+    figure: spacingSketch({
       description: `${cap(countWord(p.count))} ${name}s across ${span}; the distance from the left end to the left edge of the ${ordinalWord(p.index)} ${name} is asked.`,
       span: p.span,
-      memberWidth: w,
       count: p.count,
       endCondition: p.endCondition,
       spanLabel: span,
       highlight: p.index,
-      dimensions: [{ x1: new Fraction(0), x2: r.members[p.index - 1].start, label: "?" }],
+      ask: { toMember: p.index },
+      answers: lengthAnswers(parts(p), solve(p)),
     }),
   };
 }

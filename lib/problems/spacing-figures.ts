@@ -1,9 +1,10 @@
 // Shared pieces of the spacing, marking, guard and wall-grid kinds: stock sizes, spans drawn
-// per level, words for counts, the slip table every kind diagnoses from, and the drawings.
-import { actualSize, Fraction, wallGrid, type EndCondition, type WallGridResult } from "@/lib/layout";
+// per level, words for counts, the slip table every kind diagnoses from, and the wall's drawing.
+import { actualSize, Fraction, wallGrid, type WallGridResult } from "@/lib/layout";
 import { inchText, matchesSlip, precisionFor, roundingSlip } from "./kit";
 import type { ErrorPattern } from "./patterns";
 import type { Random } from "./random";
+import { wallSketch } from "./schematic-figures";
 import type { Level, LevelInfo, ProblemFigure } from "./types";
 
 export type Nominal = "1x2" | "1x3" | "1x4" | "1x6" | "1x8" | "2x2";
@@ -126,8 +127,6 @@ export function diagnoseFrom(slips: readonly Slip[], part: string, exact: Fracti
   return precision === 1 ? null : roundingSlip(exact, precision, answer);
 }
 
-const n = (value: Fraction) => Number(value.valueOf());
-
 /** TeX for an exact length whatever its denominator, e.g. `16\tfrac{3}{14}''`. */
 export function exactTex(value: Fraction, unit = "''"): string {
   const negative = value.s < 0n;
@@ -141,86 +140,6 @@ export function exactTex(value: Fraction, unit = "''"): string {
 /** "to the nearest 1/16"" */
 export function nearestText(precision: number): string {
   return `to the nearest 1/${precision}"`;
-}
-
-/**
- * An elevation of members across a span: flush at both ends ("members") or between two
- * posts ("gaps"). `show` false leaves the members out, for when their count is the question.
- */
-export function spacingFigure(options: {
-  description: string;
-  span: Fraction;
-  memberWidth: Fraction;
-  count: number;
-  endCondition: EndCondition;
-  spanLabel: string;
-  show?: boolean;
-  highlight?: number;
-  dimensions?: { x1: Fraction; x2: Fraction; label: string }[];
-}): ProblemFigure {
-  const { span, memberWidth, count, endCondition } = options;
-  const post = endCondition === "gaps" ? 3.5 : 0;
-  const width = n(span) + 2 * post;
-  const height = Math.max(24, Math.min(60, width / 3));
-  const rects: ProblemFigure["rects"] = [];
-  if (post > 0) {
-    rects.push({ x: 0, y: 0, w: post, h: height, tone: "post" }, { x: post + n(span), y: 0, w: post, h: height, tone: "post" });
-  }
-  if (options.show ?? true) {
-    const spaces = endCondition === "members" ? count - 1 : count + 1;
-    const gap = span.sub(memberWidth.mul(count)).div(spaces);
-    for (let i = 0; i < count; i++) {
-      const start = (endCondition === "members" ? new Fraction(0) : gap).add(gap.add(memberWidth).mul(i));
-      rects.push({ x: post + n(start), y: 0, w: n(memberWidth), h: height, tone: i + 1 === options.highlight ? "highlight" : "member" });
-    }
-  }
-  const dimensions = [
-    { x1: post, x2: post + n(span), y: height + 8, label: options.spanLabel },
-    ...(options.dimensions ?? []).map((d, i) => ({ x1: post + n(d.x1), x2: post + n(d.x2), y: height + 16 + 8 * i, label: d.label })),
-  ];
-  return { description: options.description, width, height: height + 16 + 8 * (options.dimensions?.length ?? 0), rects, dimensions };
-}
-
-/** A board-and-batten wall: base trim, bottom rail, top rail and the verticals between them. */
-export function wallFigure(options: {
-  description: string;
-  wallWidth: Fraction;
-  wallHeight: Fraction;
-  topRail: Fraction;
-  bottomRail: Fraction;
-  baseTrim: Fraction;
-  verticalWidth: Fraction;
-  verticals: number;
-  rows?: number;
-  widthLabel: string;
-  askVertical?: boolean;
-  askBay?: boolean;
-}): ProblemFigure {
-  const w = n(options.wallWidth);
-  const h = n(options.wallHeight);
-  const top = n(options.topRail);
-  const bottomTop = h - n(options.baseTrim) - n(options.bottomRail);
-  const rects: ProblemFigure["rects"] = [
-    { x: 0, y: h - n(options.baseTrim), w, h: n(options.baseTrim), tone: "trim", label: "base trim" },
-    { x: 0, y: bottomTop, w, h: n(options.bottomRail), tone: "rail", label: "bottom rail" },
-    { x: 0, y: 0, w, h: top, tone: "rail", label: "top rail" },
-  ];
-  const vw = n(options.verticalWidth);
-  const bay = (w - options.verticals * vw) / (options.verticals - 1);
-  for (let i = 0; i < options.verticals; i++) {
-    const asked = options.askVertical && i === 1;
-    rects.push({ x: i * (bay + vw), y: top, w: vw, h: bottomTop - top, tone: asked ? "highlight" : "member", ...(asked ? { label: "?" } : {}) });
-  }
-  const rows = options.rows ?? 0;
-  const panel = (bottomTop - top - rows * vw) / (rows + 1);
-  for (let r = 1; r <= rows; r++) {
-    for (let i = 0; i + 1 < options.verticals; i++) {
-      rects.push({ x: i * (bay + vw) + vw, y: top + r * panel + (r - 1) * vw, w: bay, h: vw, tone: options.askBay && i === 0 && r === 1 ? "highlight" : "rail" });
-    }
-  }
-  const dimensions = [{ x1: 0, x2: w, y: h + 8, label: options.widthLabel }];
-  if (options.askBay) dimensions.push({ x1: vw, x2: vw + bay, y: h + 16, label: "?" });
-  return { description: options.description, width: w, height: h + (options.askBay ? 24 : 16), rects, dimensions };
 }
 
 /** A board-and-batten or grid wall as the wall-grid kinds describe it. */
@@ -264,19 +183,18 @@ export function gridFor(p: WallParams): WallGridResult {
   return grid;
 }
 
-export function wallFigureFor(p: WallParams, description: string, ask: { vertical?: boolean; bay?: boolean }): ProblemFigure {
-  return wallFigure({
+/** The wall's sketch; `answers` are the lengths it must not let anyone measure off it. */
+export function wallFigureFor(p: WallParams, description: string, ask: { vertical?: boolean; bay?: boolean }, answers: readonly number[]): ProblemFigure {
+  return wallSketch({
     description,
     wallWidth: p.wallWidth,
     wallHeight: p.wallHeight,
-    topRail: faceWidth(p.topRail),
-    bottomRail: faceWidth(p.bottomRail),
-    baseTrim: p.baseTrim,
-    verticalWidth: faceWidth(p.vertical),
+    hasBaseTrim: p.baseTrim.compare(0) > 0,
     verticals: p.verticalCount,
     rows: p.rows,
     widthLabel: givenText(p.wallWidth, p.level),
     askVertical: ask.vertical,
     askBay: ask.bay,
+    answers,
   });
 }

@@ -28,10 +28,15 @@ export type ProblemPart = {
   tolerance?: Fraction;
 };
 
-/** A simple elevation for the prompt, in inches (floats are fine: it is only drawn). */
+/**
+ * A simple elevation for the prompt. Drawing units are inches only for a drawing that is the
+ * question itself (a tape to read); the others are sketches, `schematic`, shown as not to scale.
+ */
 export type ProblemFigure = {
   /** The drawing's text for screen readers. */
   description: string;
+  /** Proportions are made up so that nothing can be measured off the drawing. */
+  schematic?: boolean;
   width: number;
   height: number;
   rects: { x: number; y: number; w: number; h: number; tone: "member" | "rail" | "trim" | "stud" | "stock" | "post" | "tread" | "highlight"; label?: string }[];

@@ -40,13 +40,13 @@ async function storedFor(problemId: string) {
 }
 
 /**
- * A reply with what the student already has taken out: the prompt and drawing (each kind's property
- * test checks those hold no answer) and the echo of their own answers. What is left must not hold one.
+ * A reply with what the student already has taken out: the prompt's text (each kind's property test
+ * checks it holds no answer) and the echo of their own answers. What is left, the drawing included,
+ * must not hold one.
  */
 const searchable = (text: string) =>
   text
     .replace(/"promptHtml":"(?:[^"\\]|\\.)*"/g, "")
-    .replace(/"figure":\{.*?\]\}/g, "")
     .replace(/"(?:raw|readAs)":"(?:[^"\\]|\\.)*"/g, "")
     .replace(/"message":"Right: (?:[^"\\]|\\.)*"/g, "");
 

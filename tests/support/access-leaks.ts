@@ -71,21 +71,11 @@ export function plainText(body: string): string {
 }
 
 /**
- * The problem's drawing is left out of this search. It is drawn to scale, so its coordinates are
- * decimal inches: some equal an answer by chance (a batten at 17.5 when the battens total 17 1/2"),
- * and the positions it draws follow from the answer by design. Whether the drawing may carry them
- * is a question about the drawing, not about which route lets a reply out; this search is about the latter.
+ * The forms found in `body`, less those already in `baseline` (the same page before any problem
+ * existed). The whole body is searched, the problem's drawing included: a drawing is part of the prompt.
  */
-export function withoutDrawings(text: string): string {
-  return text
-    .replace(/<svg[\s\S]*?<\/svg>/g, "")
-    .replace(/"(?:rects|dimensions)":\[[^\]]*\]/g, "")
-    .replace(/"(?:x|y|w|h|x1|x2|width|height)":-?[\d.]+/g, "");
-}
-
-/** The forms found in `body`, less those already in `baseline` (the same page before any problem existed). */
 export function leaksIn(body: string, forms: AnswerForm[], baseline?: string): string[] {
-  const text = withoutDrawings(plainText(body));
-  const before = baseline === undefined ? "" : withoutDrawings(plainText(baseline));
+  const text = plainText(body);
+  const before = baseline === undefined ? "" : plainText(baseline);
   return forms.filter((f) => f.pattern.test(text) && !f.pattern.test(before)).map((f) => f.what);
 }
