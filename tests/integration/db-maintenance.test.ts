@@ -185,7 +185,14 @@ describe("migrations on a copy of the demo database", () => {
       const afterDown = await fingerprints(sequelize);
       const dropped = Object.keys(before).filter((t) => !(t in afterDown));
       expect(dropped.length).toBeGreaterThan(0);
-      for (const table of Object.keys(afterDown)) expect({ table, ...afterDown[table] }).toEqual({ table, ...before[table] });
+      const schemaDown = await schemaOf(sequelize);
+      const sqlOf = (schema: typeof schemaDown, table: string) => schema.find((s) => s.type === "table" && s.name === table)?.sql;
+      for (const table of Object.keys(afterDown)) {
+        if (sqlOf(schemaDown, table) === sqlOf(schemaBefore, table)) expect({ table, ...afterDown[table] }).toEqual({ table, ...before[table] });
+        // A table that lost a column on the way down (users.session_version) keeps every row; the
+        // round trip below must then give back exactly what was there.
+        else expect({ table, rows: afterDown[table].rows }).toEqual({ table, rows: before[table].rows });
+      }
 
       const saved = Object.fromEntries(
         await Promise.all(dropped.map(async (t) => [t, await withDatabase(demo, (db) => db.sequelize.query<Record<string, unknown>>(`SELECT * FROM "${t}"`, { type: QueryTypes.SELECT }))] as const)),

@@ -7,17 +7,22 @@ import path from "node:path";
 import fc from "fast-check";
 import sharp from "sharp";
 import { Op } from "sequelize";
-import { beforeAll, describe, expect, inject, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { MAX_IMPORT_ROWS } from "@/lib/classes/schemas";
 import { MAX_REQUEST_BYTES } from "@/lib/uploads/limits";
 import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
+import { startApp, type RunningApp } from "../support/app-server";
 import { signInCookie } from "../support/http";
 import { cameraPhoto, zipFile } from "../unit/uploads/sample-images";
 
-const baseURL = inject("baseURL");
-const databasePath = inject("databasePath");
-const uploadsFolder = path.join(path.dirname(databasePath), "uploads");
 const SLOW = { timeout: 240_000 };
+
+// Its own app: dozens of imports and uploads as one instructor and one student in a minute are
+// legitimate here, so every rate limit is multiplied (the rate-limit suite checks the real ones).
+let app: RunningApp;
+let baseURL = "";
+let databasePath = "";
+let uploadsFolder = "";
 
 let classId = 0;
 let assignmentId = 0;
@@ -25,6 +30,9 @@ let studentId = 0;
 const cookies = { instructor: "", student: "" };
 
 beforeAll(async () => {
+  app = await startApp({ seed: false, env: { RATE_LIMIT_SCALE: "100" } });
+  ({ url: baseURL, databasePath } = app);
+  uploadsFolder = path.join(path.dirname(databasePath), "uploads");
   const instructor = await createPerson(databasePath, "Greta Olsen", "instructor");
   const student = await createPerson(databasePath, "Nico Ferreira");
   studentId = student.id;
@@ -33,6 +41,10 @@ beforeAll(async () => {
   cookies.instructor = (await signInCookie(baseURL, instructor.email, FIXTURE_PASSWORD))!;
   cookies.student = (await signInCookie(baseURL, student.email, FIXTURE_PASSWORD))!;
   expect(cookies.instructor && cookies.student).toBeTruthy();
+}, 60_000);
+
+afterAll(async () => {
+  await app?.stop();
 });
 
 type ErrorBody = { error: { code: string; message: string; fields?: Record<string, string> } };

@@ -15,12 +15,18 @@ const escape = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
  */
 const whole = (text: string) => new RegExp(`(?<![\\d/.]|\\d )${escape(text)}(?![\\d/])`);
 
-function decimalForms(value: number): string[] {
+/** Decimal inches as a pattern: whole when short, and only its first four decimals when longer. */
+function decimalForms(value: number): { text: string; pattern: RegExp }[] {
   if (Number.isInteger(value)) return [];
   const full = String(value);
   const [, decimals = ""] = full.split(".");
   // A long decimal may be cut short or rounded anywhere past the fourth place; its first four decimals are enough.
-  return decimals.length > 4 ? [full.slice(0, full.indexOf(".") + 5)] : [full];
+  if (decimals.length > 4) {
+    const cut = full.slice(0, full.indexOf(".") + 5);
+    return [{ text: cut, pattern: new RegExp(`(?<![\\d.])${escape(cut)}`) }];
+  }
+  // A short one is a number of its own: 20.5 is not inside 20.55.
+  return [{ text: full, pattern: new RegExp(`(?<![\\d.])${escape(full)}(?!\\d)`) }];
 }
 
 /** Every form of every answer of one problem, and the solution's steps that carry numbers. */
@@ -35,9 +41,8 @@ export function answerForms(kindKey: string, params: unknown, label: string): An
     const rounded = roundedAnswer(exact, part.precision);
     const texts = new Set([formatMeasure(exact, { denominator: part.precision }).text.replace(/"$/, ""), rounded.toFraction(true), exact.toFraction(true), exact.toFraction()]);
     for (const text of texts) if (text.includes("/")) forms.push({ what: `${label} ${part.key} as ${text}`, pattern: whole(text) });
-    for (const value of new Set([...decimalForms(exact.valueOf()), ...decimalForms(rounded.valueOf())])) {
-      forms.push({ what: `${label} ${part.key} as ${value} in.`, pattern: new RegExp(`(?<![\\d.])${escape(value)}`) });
-    }
+    const decimals = new Map([...decimalForms(exact.valueOf()), ...decimalForms(rounded.valueOf())].map((d) => [d.text, d.pattern]));
+    for (const [value, pattern] of decimals) forms.push({ what: `${label} ${part.key} as ${value} in.`, pattern });
   }
   // Steps in plain words (no typeset math) are searched whole: "…, 5 spaces, gap 17 3/8"."
   for (const step of kind.explain(params as never)) {

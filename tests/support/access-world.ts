@@ -212,7 +212,11 @@ export function exportedRouteMethods(): string[] {
     const direct = new RegExp(`export\\s+(?:const|let|async\\s+function|function)\\s+(${METHOD})\\b`, "g");
     for (const m of source.matchAll(direct)) found.add(`${m[1]} ${routeKey(file)}`);
     for (const block of source.matchAll(/export\s*\{([^}]*)\}/g)) {
-      for (const m of block[1].matchAll(new RegExp(`\\bas\\s+(${METHOD})\\b|^\\s*(${METHOD})\\s*$`, "gm"))) found.add(`${m[1] ?? m[2]} ${routeKey(file)}`);
+      // Each specifier is "name" or "local as name"; the exported name is the last word.
+      for (const specifier of block[1].split(",")) {
+        const exported = specifier.trim().split(/\s+/).pop() ?? "";
+        if (new RegExp(`^(${METHOD})$`).test(exported)) found.add(`${exported} ${routeKey(file)}`);
+      }
     }
   }
   return [...found].sort();
