@@ -79,9 +79,12 @@ export default async function StudentClassPage({ params }: PageProps<"/my-classe
                     </dd>
                   </div>
                   {a.override ? (
-                    <p className="w-full text-ink-soft" data-override>
-                      {a.override.excused ? "Excused" : "Score changed"} by your instructor: “{a.override.reason}”
-                    </p>
+                    <div className="w-full">
+                      <dt className="sr-only">Note</dt>
+                      <dd className="text-ink-soft" data-override>
+                        {a.override.excused ? "Excused" : "Score changed"} by your instructor: “{a.override.reason}”
+                      </dd>
+                    </div>
                   ) : null}
                   <div className="flex gap-1">
                     <dt className="text-ink-faint">Finished</dt>
