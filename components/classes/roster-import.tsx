@@ -7,6 +7,7 @@ import { MAX_IMPORT_BYTES, MAX_IMPORT_ROWS } from "@/lib/classes/schemas";
 import { Alert } from "@/components/ui/alert";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { callApi } from "@/components/ui/call-api";
+import { focusFirstInvalid } from "@/components/ui/use-server-form";
 import { ImportPreviewTable } from "./import-preview-table";
 import { SendProgress } from "./send-progress";
 
@@ -25,7 +26,8 @@ export function RosterImport({ classId }: { classId: number }) {
   const refuse = (source: "file" | "paste", message: string) => {
     setInputError({ source, message });
     setStage({ kind: "empty" });
-    requestAnimationFrame(() => document.getElementById(`${id}-${source}`)?.focus());
+    // Retried over a few frames: the control may be re-rendered right after the refusal.
+    focusFirstInvalid(() => document.getElementById(`${id}-${source}`)?.parentElement ?? null);
   };
 
   const check = async (csv: string, source: "file" | "paste") => {
