@@ -7,6 +7,7 @@ import * as problemPartCount from "./20261203-0009-problem-part-count";
 import * as scoreOverrides from "./20261204-0010-score-overrides";
 import * as idempotencyKeys from "./20261205-0011-idempotency-keys";
 import * as sessionVersion from "./20261205-0012-session-version";
+import * as scoreReads from "./20261206-0013-score-reads";
 
 // Listed by hand, in order, so the same list runs under tsx, vitest and Next without a file glob.
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   { name: "20261204-0010-score-overrides", ...scoreOverrides },
   { name: "20261205-0011-idempotency-keys", ...idempotencyKeys },
   { name: "20261205-0012-session-version", ...sessionVersion },
+  { name: "20261206-0013-score-reads", ...scoreReads },
 ];

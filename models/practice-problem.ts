@@ -19,6 +19,8 @@ export class PracticeProblem extends Model<InferAttributes<PracticeProblem>, Inf
   declare attemptsUsed: CreationOptional<number>;
   declare status: CreationOptional<ProblemStatus>;
   declare finishedAt: CreationOptional<Date | null>;
+  /** The time of the newest try (written with it), so scores need not read every try for it. */
+  declare lastTryAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -35,6 +37,7 @@ export class PracticeProblem extends Model<InferAttributes<PracticeProblem>, Inf
         attemptsUsed: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "open" },
         finishedAt: { type: DataTypes.DATE, allowNull: true },
+        lastTryAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

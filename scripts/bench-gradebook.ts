@@ -98,13 +98,13 @@ async function benchmark(appUrl: string | null) {
             }
             if (right.size === parts) break;
           }
-          problems.push([id, s, itemId, 0, "even-gap", 1, 1, TRIES, used, right.size === parts ? "solved" : "failed", parts, t, t]);
+          problems.push([id, s, itemId, 0, "even-gap", 1, 1, TRIES, used, right.size === parts ? "solved" : "failed", parts, iso(due - 2 * day + used * 3600_000), t, t]);
         }
       }
     }
     await insert("assignments", ["id", "class_id", "title", "instructions", "opens_at", "due_at", "late_policy", "attempts_allowed", "reveal", "status", "published_at", "created_at", "updated_at"], assignments);
     await insert("assignment_items", ["id", "assignment_id", "position", "kind", "level", "problem_count", "tolerance", "points", "created_at", "updated_at"], items);
-    await insert("practice_problems", ["id", "user_id", "assignment_item_id", "variant", "kind", "level", "seed", "attempts_allowed", "attempts_used", "status", "part_count", "created_at", "updated_at"], problems);
+    await insert("practice_problems", ["id", "user_id", "assignment_item_id", "variant", "kind", "level", "seed", "attempts_allowed", "attempts_used", "status", "part_count", "last_try_at", "created_at", "updated_at"], problems);
     await insert("attempts", ["problem_id", "user_id", "assignment_item_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "pattern", "time_ms", "created_at"], attempts);
     console.log(`Generated ${STUDENTS} students × ${ASSIGNMENTS} assignments × ${ITEMS} items: ${problems.length} problems, ${attempts.length} tries (${Math.round(performance.now() - started)} ms)`);
   });

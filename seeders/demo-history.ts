@@ -55,7 +55,7 @@ const LESSONS = ["reading-a-tape", "fractions-for-layout", "lumber-sizes", "even
 const PHOTO_COMMENT = "Clean, square ticks. Next time put a V on the side of the line the batten goes, so whoever cuts knows which edge to hold to.";
 
 const ATTEMPT_COLUMNS = ["problem_id", "user_id", "assignment_item_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "pattern", "time_ms", "created_at"];
-const PROBLEM_COLUMNS = ["id", "user_id", "assignment_item_id", "variant", "kind", "level", "seed", "attempts_allowed", "part_count", "attempts_used", "status", "finished_at", "created_at", "updated_at"];
+const PROBLEM_COLUMNS = ["id", "user_id", "assignment_item_id", "variant", "kind", "level", "seed", "attempts_allowed", "part_count", "attempts_used", "status", "finished_at", "last_try_at", "created_at", "updated_at"];
 
 type Row = (string | number | null)[];
 type Item = { id: number; kind: string; level: number; problemCount: number; points: number };
@@ -77,11 +77,13 @@ function workOneProblem(
   let used = 0;
   let at = start;
   let finishedAt: number | null = null;
+  let lastTryAt: number | null = null;
   while (used < problem.attemptsAllowed) {
     const timeMs = random.int(student.profile.seconds[0], student.profile.seconds[1]) * 1000;
     if (at + timeMs > until) break;
     at += timeMs;
     used += 1;
+    lastTryAt = at;
     const open = work.parts.filter((p) => !right.has(p.key));
     for (const graded of attemptParts(work, open, student.profile, used, random)) {
       if (graded.grade.verdict === "correct") right.add(graded.part);
@@ -99,7 +101,7 @@ function workOneProblem(
   if (status === "failed") finishedAt = at;
   const created = sqliteDate(new Date(start));
   const updated = sqliteDate(new Date(used > 0 ? at : start));
-  out.problems.push([problem.id, problem.userId, problem.itemId, problem.variant, problem.kind, problem.level, problem.seed, problem.attemptsAllowed, work.parts.length, used, status, finishedAt === null ? null : sqliteDate(new Date(finishedAt)), created, updated]);
+  out.problems.push([problem.id, problem.userId, problem.itemId, problem.variant, problem.kind, problem.level, problem.seed, problem.attemptsAllowed, work.parts.length, used, status, finishedAt === null ? null : sqliteDate(new Date(finishedAt)), lastTryAt === null ? null : sqliteDate(new Date(lastTryAt)), created, updated]);
   return at + random.int(1, 4) * MINUTE;
 }
 

@@ -38,32 +38,32 @@ const unixMs = (column: string) => `CAST(ROUND((julianday(${column}) - 2440587.5
 const DAY_MS = 24 * 60 * 60 * 1000;
 
 /**
- * One pass over the tries of these assignments, giving per student and assignment: the points
- * earned, how many problems have any try, and the last try. A part earns its problem's points ÷
- * parts × the credit share of the try in which it first came out right (once right it is not asked
- * again). The share is policy.ts's creditShare written in SQL — 1 on time; under a daily penalty,
- * 1 − days late (any part of a day counts) × percent, never below 0 — from the student's own due
- * date. The gradebook integration test checks the result against a recomputation in JavaScript.
+ * One pass giving, per student and assignment: the points earned, how many problems are finished
+ * and how many tried, and the last try. Each try is counted on its problem as it is stored
+ * (attempts_used, last_try_at), so only the right tries are read, from their own covering index
+ * (migration 0013); the problems come from a covering index too. A part earns its problem's
+ * points ÷ parts × the credit share of the try in which it came out right; a part once right is not
+ * asked again, so it has one right try at most (a unique index). The share is policy.ts's
+ * creditShare written in SQL — 1 on time; under a daily penalty, 1 − days late (any part of a day
+ * counts) × percent, never below 0 — from the student's own due date. The joins run assignment →
+ * student → item → problem, the order of the GROUP BY, so SQLite sums as it reads, with no sort.
+ * The gradebook integration test checks the result against a recomputation from the raw tries.
  */
 function workSql(assignmentCount: number, byStudent: string): string {
-  const over = `(${unixMs("r.firstAt")} - ${unixMs("COALESCE(x.due_at, s.due_at)")})`;
+  const over = `(${unixMs("a.created_at")} - ${unixMs("COALESCE(x.due_at, s.due_at)")})`;
   const days = `(CASE WHEN ${over} <= 0 THEN 0 ELSE (${over} + ${DAY_MS - 1}) / ${DAY_MS} END)`;
   const share = `(CASE WHEN s.late_policy = 'penalty' AND s.late_penalty_percent > 0
       THEN MAX(0.0, 1.0 - ${days} * s.late_penalty_percent / 100.0) ELSE 1.0 END)`;
-  // The problem's columns ride along with each part's group (the same in every row of it), so the
-  // outer sum needs no second look-up of the problem or its item.
-  return `WITH parts AS (
-      SELECT a.problem_id AS problemId, p.user_id AS userId, i.assignment_id AS assignmentId, i.points, p.part_count AS partCount,
-        MIN(CASE WHEN a.verdict = 'correct' THEN a.created_at END) AS firstAt, MAX(a.created_at) AS lastAt
-      FROM practice_problems p JOIN assignment_items i ON i.id = p.assignment_item_id JOIN attempts a ON a.problem_id = p.id
-      WHERE i.assignment_id IN (${marks(Array.from({ length: assignmentCount }))}) AND p.variant < i.problem_count${byStudent}
-      GROUP BY a.problem_id, a.part)
-    SELECT r.assignmentId, r.userId, COUNT(DISTINCT r.problemId) AS triedProblems, MAX(r.lastAt) AS lastAt,
-      SUM(CASE WHEN r.firstAt IS NULL THEN 0.0 ELSE r.points * ${share} / r.partCount END) AS earned
-    FROM parts r
-    JOIN assignments s ON s.id = r.assignmentId
-    LEFT JOIN assignment_extensions x ON x.assignment_id = s.id AND x.student_id = r.userId
-    GROUP BY r.assignmentId, r.userId`;
+  return `SELECT s.id AS assignmentId, e.student_id AS userId,
+      TOTAL((SELECT TOTAL(${share}) FROM attempts a WHERE a.problem_id = p.id AND a.verdict = 'correct') * i.points / p.part_count) AS earned,
+      SUM(p.status <> 'open') AS finished, SUM(p.attempts_used > 0) AS tried, MAX(p.last_try_at) AS lastAt
+    FROM assignments s
+    JOIN enrollments e ON e.class_id = s.class_id AND e.status = 'active'
+    LEFT JOIN assignment_extensions x ON x.assignment_id = s.id AND x.student_id = e.student_id
+    CROSS JOIN assignment_items i ON i.assignment_id = s.id
+    CROSS JOIN practice_problems p ON p.assignment_item_id = i.id AND p.user_id = e.student_id AND p.variant < i.problem_count
+    WHERE s.id IN (${marks(Array.from({ length: assignmentCount }))})${byStudent}
+    GROUP BY s.id, e.student_id`;
 }
 
 /**
@@ -72,25 +72,35 @@ function workSql(assignmentCount: number, byStudent: string): string {
  * requests filling the same row write the same number).
  */
 async function sizeUnsizedProblems(assignmentIds: readonly Id[]): Promise<void> {
+  // Every variant made today stores its count, so an assignment once sized stays sized: look once
+  // per assignment per process (per database, as tests open several in one process).
+  const { sequelize } = db();
+  let sized = sizedAssignments.get(sequelize);
+  if (!sized) sizedAssignments.set(sequelize, (sized = new Set()));
+  const unchecked = assignmentIds.filter((id) => !sized.has(id));
+  if (unchecked.length === 0) return;
   const unsized = await select<{ id: string; kind: string; level: number; seed: number }>(
     `SELECT p.id, p.kind, p.level, p.seed FROM practice_problems p JOIN assignment_items i ON i.id = p.assignment_item_id
-     WHERE i.assignment_id IN (${marks(assignmentIds)}) AND p.part_count IS NULL`,
-    [...assignmentIds],
+     WHERE i.assignment_id IN (${marks(unchecked)}) AND p.part_count IS NULL`,
+    [...unchecked],
   );
-  if (unsized.length === 0) return;
-  await db().sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
-    for (const p of unsized) {
-      await db().sequelize.query("UPDATE practice_problems SET part_count = ? WHERE id = ? AND part_count IS NULL", {
-        replacements: [partCountOf(p.kind, p.level, p.seed), p.id],
-        transaction,
-      });
-    }
-  });
+  if (unsized.length > 0) {
+    await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+      for (const p of unsized) {
+        await sequelize.query("UPDATE practice_problems SET part_count = ? WHERE id = ? AND part_count IS NULL", {
+          replacements: [partCountOf(p.kind, p.level, p.seed), p.id],
+          transaction,
+        });
+      }
+    });
+  }
+  for (const id of unchecked) sized.add(id);
 }
+const sizedAssignments = new WeakMap<object, Set<Id>>();
 
 /**
  * Scores of the active students of each assignment's class (or only `onlyStudent`), keyed by
- * assignment id. Six queries for the whole batch, whatever its size (and, once, an update for
+ * assignment id. Four queries for the whole batch, whatever its size (and, once, an update for
  * variants made before part counts were stored; the gradebook test's generated class has such rows).
  */
 export async function scoresFor(assignments: readonly AssignmentRecord[], onlyStudent: Id | null = null, now = new Date()): Promise<Map<Id, StudentScore[]>> {
@@ -99,11 +109,11 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
   const ids = assignments.map((a) => a.id);
   const classIds = [...new Set(assignments.map((a) => a.classId))];
   const student = onlyStudent === null ? "" : " AND s.id = ?";
-  const byStudent = onlyStudent === null ? "" : " AND p.user_id = ?";
+  const byEnrolled = onlyStudent === null ? "" : " AND e.student_id = ?";
   const also = onlyStudent === null ? [] : [onlyStudent];
 
   await sizeUnsizedProblems(ids);
-  const [items, students, extensions, standing, work] = await Promise.all([
+  const [items, students, extensions, work] = await Promise.all([
     select<{ id: Id; assignmentId: Id; points: number; problemCount: number }>(
       `SELECT id, assignment_id AS assignmentId, points, problem_count AS problemCount FROM assignment_items WHERE assignment_id IN (${marks(ids)})`,
       ids,
@@ -118,20 +128,12 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
        WHERE assignment_id IN (${marks(ids)})${onlyStudent === null ? "" : " AND s.student_id = ?"}`,
       [...ids, ...also],
     ),
-    select<{ assignmentId: Id; userId: Id; finished: number }>(
-      `SELECT i.assignment_id AS assignmentId, p.user_id AS userId, SUM(p.status <> 'open') AS finished
-       FROM practice_problems p JOIN assignment_items i ON i.id = p.assignment_item_id
-       WHERE i.assignment_id IN (${marks(ids)}) AND p.variant < i.problem_count${byStudent}
-       GROUP BY i.assignment_id, p.user_id`,
-      [...ids, ...also],
-    ),
-    select<{ assignmentId: Id; userId: Id; triedProblems: number; lastAt: string; earned: number }>(workSql(ids.length, byStudent), [...ids, ...also]),
+    select<{ assignmentId: Id; userId: Id; earned: number; finished: number; tried: number; lastAt: string | null }>(workSql(ids.length, byEnrolled), [...ids, ...also]),
   ]);
 
   const key = (assignmentId: Id, studentId: Id) => `${assignmentId}:${studentId}`;
   const extensionOf = new Map(extensions.map((e) => [key(e.assignmentId, e.studentId), e]));
   const workOf = new Map(work.map((w) => [key(w.assignmentId, w.userId), w]));
-  const finishedOf = new Map(standing.map((f) => [key(f.assignmentId, f.userId), Number(f.finished)]));
   const studentsOf = new Map<Id, typeof students>();
   for (const s of students) {
     const list = studentsOf.get(s.classId);
@@ -148,8 +150,9 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
       const extension: StudentExtension = ext ? { dueAt: ext.dueAt ? sqlDate(ext.dueAt) : null, extraAttempts: ext.extraAttempts } : null;
       const worked = workOf.get(key(assignment.id, s.id));
       const earned = roundPoints(Number(worked?.earned ?? 0));
-      const lastTryAt = worked ? sqlDate(worked.lastAt) : null;
-      const finished = finishedOf.get(key(assignment.id, s.id)) ?? 0;
+      const finished = Number(worked?.finished ?? 0);
+      const tried = Number(worked?.tried ?? 0);
+      const lastTryAt = worked?.lastAt ? sqlDate(worked.lastAt) : null;
       result.get(assignment.id)!.push({
         studentId: s.id,
         name: s.name,
@@ -158,7 +161,7 @@ export async function scoresFor(assignments: readonly AssignmentRecord[], onlySt
         possible,
         percent: percentOf(earned, possible),
         late: workedLate(lastTryAt, assignment, extension),
-        status: workStatus({ tries: Number(worked?.triedProblems ?? 0), lastTryAt, finished, total }, now, assignment, extension),
+        status: workStatus({ tries: tried, lastTryAt, finished, total }, now, assignment, extension),
         finished,
         total,
         lastActivityAt: lastTryAt?.toISOString() ?? null,

@@ -1,5 +1,5 @@
 // The class's gradebook: active students × published assignments, from a fixed handful of grouped
-// queries (scoresFor's six, one for overrides, one for photo counts, two small lists) whatever the
+// queries (scoresFor's four, one for overrides, one for photo counts, two small lists) whatever the
 // size of the class.
 import "server-only";
 import { QueryTypes } from "sequelize";
@@ -8,7 +8,7 @@ import type { SessionUser } from "@/lib/auth/roles";
 import { assignmentRecord, type AssignmentRecord } from "@/lib/assignments/access";
 import { scoresFor, type StudentScore } from "@/lib/assignments/scores";
 import { percentOf } from "@/lib/assignments/student-status";
-import { classForTeacher } from "@/lib/classes/queries";
+import { classForTeacher, type ClassSummary } from "@/lib/classes/queries";
 import { overridesInForce } from "./overrides";
 import { classAverage, studentTotal } from "./totals";
 import type { Gradebook, GradebookCell, GradebookStudent } from "./types";
@@ -58,7 +58,12 @@ export function cellOf(assignmentId: number, score: StudentScore | undefined, po
 
 /** For the class's instructors and admins (403 otherwise, 404 for no such class). */
 export async function gradebook(user: SessionUser, classId: number): Promise<Gradebook> {
-  const summary = await classForTeacher(user, classId);
+  return gradebookOf(await classForTeacher(user, classId));
+}
+
+/** The gradebook of a class the caller has already been allowed to teach (classForTeacher's result). */
+export async function gradebookOf(summary: ClassSummary): Promise<Gradebook> {
+  const classId = summary.id;
   const assignments = await publishedAssignments(classId);
   const ids = assignments.map((a) => a.id);
   const [students, scores, overrides, photos] = await Promise.all([activeStudents(classId), scoresFor(assignments), overridesInForce(ids), photoCounts(ids)]);

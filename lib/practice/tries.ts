@@ -135,7 +135,7 @@ export async function gradeTry<R>(
     id: problem.id,
     // The try count read above must still hold: a second try racing this one is refused.
     expect: { status: "open", attempts_used: problem.attemptsUsed },
-    set: { attempts_used: used, status, finished_at: status === "open" ? null : at, updated_at: at },
+    set: { attempts_used: used, status, finished_at: status === "open" ? null : at, last_try_at: at, updated_at: at },
     into: {
       // Practice and assignment tries share one column list, so they share a commit batch.
       table: "attempts",

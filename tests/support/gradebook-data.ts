@@ -31,9 +31,11 @@ export async function generateTries(file: string, secret: string, studentId: num
         const attempts: Record<string, unknown>[] = [];
         const solved = new Set<string>();
         let used = 0;
+        let lastTryAt: Date | null = null;
         for (let t = 1; t <= opts.tries && solved.size < parts.length; t++) {
           used = t;
           const at = new Date(opts.startAt.getTime() + (t - 1 + variant) * 3600_000 * (1 + opts.random() * 20));
+          lastTryAt = at;
           for (const p of parts) {
             if (solved.has(p.key)) continue;
             const right = opts.random() < opts.rightShare;
@@ -42,7 +44,7 @@ export async function generateTries(file: string, secret: string, studentId: num
           }
         }
         const status = solved.size === parts.length ? "solved" : used >= opts.tries ? "failed" : "open";
-        await db.models.PracticeProblem.create({ id, userId: studentId, visitorId: null, assignmentItemId: item.itemId, variant, kind: item.kind, level: item.level, seed, attemptsAllowed: opts.tries, attemptsUsed: used, status, finishedAt: status === "open" ? null : new Date() });
+        await db.models.PracticeProblem.create({ id, userId: studentId, visitorId: null, assignmentItemId: item.itemId, variant, kind: item.kind, level: item.level, seed, attemptsAllowed: opts.tries, attemptsUsed: used, lastTryAt, status, finishedAt: status === "open" ? null : new Date() });
         if (attempts.length > 0) await db.models.Attempt.bulkCreate(attempts as never[]);
       }
     }

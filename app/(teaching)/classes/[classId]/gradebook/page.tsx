@@ -3,7 +3,7 @@ import Link from "next/link";
 import { GradebookClient } from "@/components/gradebook/gradebook-client";
 import { requireRole } from "@/lib/auth/session";
 import { classForTeacher } from "@/lib/classes/queries";
-import { gradebook } from "@/lib/gradebook/gradebook";
+import { gradebookOf } from "@/lib/gradebook/gradebook";
 import { classIdOf, orPage } from "../load-class";
 
 export const metadata: Metadata = { title: "Gradebook" };
@@ -11,7 +11,10 @@ export const metadata: Metadata = { title: "Gradebook" };
 export default async function GradebookPage({ params }: PageProps<"/classes/[classId]/gradebook">) {
   const user = await requireRole("instructor", "admin");
   const classId = classIdOf((await params).classId);
-  const [summary, data] = await orPage(() => Promise.all([classForTeacher(user, classId), gradebook(user, classId)]));
+  const { summary, data } = await orPage(async () => {
+    const summary = await classForTeacher(user, classId);
+    return { summary, data: await gradebookOf(summary) };
+  });
   return (
     <div className="space-y-6">
       {/* A wide grid reads best across the page. */}
