@@ -57,6 +57,16 @@ export const gt = (a: Fraction, b: Fraction) => a.compare(b) > 0;
 export const gte = (a: Fraction, b: Fraction) => a.compare(b) >= 0;
 export const eq = (a: Fraction, b: Fraction) => a.equals(b);
 
+/**
+ * The nearest double. Fraction's own valueOf divides Number(n) by Number(d), which is NaN once both
+ * pass 1e308 (lengths typed or derived to absurdly fine fractions); rounding to 12 decimal places
+ * first keeps the number within reach, far finer than any length shown.
+ */
+export function toNumber(value: Fraction): number {
+  const direct = value.valueOf();
+  return Number.isNaN(direct) ? value.round(12).valueOf() : direct;
+}
+
 export function sum(values: Iterable<Fraction>): Fraction {
   let total = ZERO;
   for (const v of values) total = total.add(v);

@@ -1,7 +1,7 @@
 // The cut list: the pieces a job needs → the stock boards to buy and which cuts come from
 // which board. Lengths are exact Fractions of an inch; for the search they are scaled to
 // integers by the common denominator of every length given, so no float decides a fit.
-import { Fraction, ZERO, fromMillimetres, gt, lte, sum, toMillimetres, type Length, type Unit, type Warning } from "./core";
+import { Fraction, ZERO, fromMillimetres, gt, lte, sum, toMillimetres, toNumber, type Length, type Unit, type Warning } from "./core";
 import { bestPossible, exactPacking, lowerBoundL2 } from "./cut-list-exact";
 import { StockChooser, compareScores, heuristicPacking, scorePacking, type Packing, type StockOption } from "./cut-list-heuristic";
 import { exactFromNumber, formatMeasure } from "./measure";
@@ -102,12 +102,31 @@ function checkInput(input: CutListInput) {
 const gcd = (a: bigint, b: bigint): bigint => (b === 0n ? a : gcd(b, a % b));
 const lcmOf = (values: Fraction[]) => values.reduce((l, f) => (l / gcd(l, f.d)) * f.d, 1n);
 
+// Lengths finer than this are planned on it (a millionth of an inch, far below any tape's reading).
+const FINE_GRID = 1n << 20n;
+const floorDiv = (n: bigint, d: bigint) => (n >= 0n ? n / d : -((-n + d - 1n) / d));
+
+/**
+ * Whole numbers for the packers: every length times the least common denominator, which plans
+ * exactly. When that would not fit in a double (lengths typed or computed to absurdly fine
+ * fractions), it plans on a 1/1,048,576 grid instead, rounding each piece up and each board's room
+ * down, so whatever fits on the grid fits the real lengths too; `exact` says which it was.
+ */
 function scaler(values: Fraction[]) {
-  const scale = lcmOf(values);
-  return (f: Fraction): number => {
-    const scaled = f.mul(new Fraction(scale)).n * (f.s < 0n ? -1n : 1n);
-    if (scaled > BigInt(Number.MAX_SAFE_INTEGER)) throw new RangeError("the lengths are divided too finely to plan exactly");
-    return Number(scaled);
+  const lcm = lcmOf(values);
+  const largest = values.reduce((most, f) => (f.abs().compare(most) > 0 ? f.abs() : most), ZERO);
+  // Room for sums of many lengths as well as each one.
+  const exact = largest.mul(new Fraction(lcm)).compare(Number.MAX_SAFE_INTEGER / 1024) <= 0;
+  const scale = exact ? lcm : FINE_GRID;
+  return {
+    exact,
+    toInt(f: Fraction, round: "up" | "down" = "down"): number {
+      const signed = f.s < 0n ? -f.n : f.n;
+      const product = signed * scale;
+      const whole = round === "up" ? -floorDiv(-product, f.d) : floorDiv(product, f.d);
+      if (whole > BigInt(Number.MAX_SAFE_INTEGER) || whole < -BigInt(Number.MAX_SAFE_INTEGER)) throw new RangeError("the lengths are too long to plan");
+      return Number(whole);
+    },
   };
 }
 
@@ -119,14 +138,17 @@ export function cutList(input: CutListInput): CutListResult {
   const warnings: Warning[] = [];
 
   const usable = input.stock.map((stock) => stock.length.sub(trim));
-  const toInt = scaler([kerf, trim, ...input.stock.map((s) => s.length), ...input.pieces.map((p) => p.length)]);
+  const lengths = scaler([kerf, trim, ...input.stock.map((s) => s.length), ...input.pieces.map((p) => p.length)]);
+  if (!lengths.exact) {
+    warnings.push({ code: "planned-on-a-grid", message: "Some lengths are divided finer than a millionth of an inch, so boards were planned with each piece rounded up to that: the plan fits, but it may not be the fewest boards." });
+  }
   const priced = input.stock.filter((stock) => stock.price !== undefined).length;
   const useCost = priced === input.stock.length;
   if (priced > 0 && !useCost) {
     warnings.push({ code: "price-missing", message: "Some stock lengths have no price, so the plan does not compare cost: it uses the fewest boards, then the shortest." });
   }
   const prices = input.stock.map((stock) => (stock.price === undefined ? ZERO : exactFromNumber(stock.price)));
-  const priceToInt = scaler(prices);
+  const money = scaler(prices);
 
   const options: StockOption[] = [];
   input.stock.forEach((stock, index) => {
@@ -134,7 +156,7 @@ export function cutList(input: CutListInput): CutListResult {
       warnings.push({ code: "stock-shorter-than-trim", message: `The ${say(stock.length)} stock is no longer than the ${say(trim)} trim, so it is never used.` });
       return;
     }
-    options.push({ capacity: toInt(usable[index].add(kerf)), cost: useCost ? priceToInt(prices[index]) : 0, length: toInt(stock.length), index });
+    options.push({ capacity: lengths.toInt(usable[index].add(kerf), "down"), cost: useCost ? money.toInt(prices[index], "up") : 0, length: lengths.toInt(stock.length), index });
   });
   const longestUsable = options.length > 0 ? usable[options.reduce((a, b) => (b.capacity > a.capacity ? b : a)).index] : ZERO;
 
@@ -143,7 +165,7 @@ export function cutList(input: CutListInput): CutListResult {
   input.pieces.forEach((piece, row) => {
     if (piece.quantity === 0) return;
     if (lte(piece.length, longestUsable)) {
-      const size = toInt(piece.length.add(kerf));
+      const size = lengths.toInt(piece.length.add(kerf), "up");
       for (let k = 0; k < piece.quantity; k++) items.push({ row, size });
       return;
     }
@@ -170,8 +192,8 @@ export function cutList(input: CutListInput): CutListResult {
     packing = exact.packing;
     complete = exact.complete;
   }
-  const optimal = complete || compareScores(scorePacking(packing, sizes, chooser), bound) <= 0;
-  if (!optimal) warnings.push(notProvenMessage(packing.filter((board) => board.length > 0).length, lowerBound));
+  const optimal = lengths.exact && (complete || compareScores(scorePacking(packing, sizes, chooser), bound) <= 0);
+  if (!optimal && lengths.exact) warnings.push(notProvenMessage(packing.filter((board) => board.length > 0).length, lowerBound));
   return assemble(input, packing, items, chooser, { lowerBound, optimal, method, unplaced, warnings });
 }
 
@@ -210,7 +232,7 @@ function assemble(input: CutListInput, packing: Packing, items: Item[], chooser:
   const totalCost = everyPriced ? sum(boards.map((board) => exactFromNumber(board.price!))).valueOf() : undefined;
   const totalPieceLength = sum(boards.flatMap((board) => board.cuts.map((cut) => cut.length)));
   const totalStockLength = sum(boards.map((board) => board.stockLength));
-  const wastePercent = totalStockLength.n === 0n ? 0 : totalStockLength.sub(totalPieceLength).div(totalStockLength).mul(100).valueOf();
+  const wastePercent = totalStockLength.n === 0n ? 0 : toNumber(totalStockLength.sub(totalPieceLength).div(totalStockLength).mul(100));
   return {
     boards,
     boardCount: boards.length,

@@ -1,7 +1,7 @@
 // Reading and writing lengths the way a tape measure and a carpenter's pencil do.
 // Every value read is an exact Fraction of an inch: decimals are built from their digits,
 // never through a float, and millimetres are converted with the exact 25.4.
-import { Fraction, fromMillimetres, roundTo, toMillimetres, type Unit } from "./core";
+import { Fraction, fromMillimetres, roundTo, toMillimetres, toNumber, type Unit } from "./core";
 
 export type MeasureError = { message: string; index: number };
 export type ParseResult = { ok: true; value: Fraction } | { ok: false; error: MeasureError };
@@ -375,7 +375,7 @@ function inUnit(value: Fraction, unit: Unit): Fraction {
 }
 
 function ratio(value: Fraction): { exact: string; value: number } {
-  return { exact: value.toFraction(), value: value.valueOf() };
+  return { exact: value.toFraction(), value: toNumber(value) };
 }
 
 /**

@@ -5,6 +5,7 @@ import { cutList, type CutListInput, type CutListResult } from "@/lib/layout/cut
 import { exactPacking, bestPossible, lowerBoundL2 } from "@/lib/layout/cut-list-exact";
 import { StockChooser, heuristicPacking } from "@/lib/layout/cut-list-heuristic";
 import { cutListSchema } from "@/lib/layout/cut-list-schema";
+import { exactFromNumber } from "@/lib/layout/measure";
 
 const F = (value: number | string) => new Fraction(value);
 const inch = (text: string) => new Fraction(text);
@@ -158,6 +159,26 @@ describe("edge cases and bad engine input", () => {
     expect(() => cutList({ ...base, kerf: F(-1) })).toThrow(RangeError);
     expect(() => cutList({ ...base, pieces: [{ label: "a", length: ZERO, quantity: 1 }] })).toThrow(RangeError);
     expect(() => cutList({ ...base, pieces: [{ label: "a", length: F(1), quantity: 1.5 }] })).toThrow(RangeError);
+  });
+
+  it("plans lengths divided absurdly finely on a millionth-of-an-inch grid, and the plan still fits", () => {
+    // Found by the request-body fuzzer: a kerf sent as the JSON number 5e-324 made the exact
+    // common denominator too big for the packers, and the route answered 500.
+    const tiny = exactFromNumber(5e-324);
+    const raw = {
+      pieces: [
+        { length: F(48).sub(tiny), quantity: 2 },
+        { length: F(30).add(new Fraction(1n, 9999991n)), quantity: 3 },
+      ],
+      stock: [{ length: F(96) }, { length: F(120) }],
+      kerf: tiny,
+      trim: ZERO,
+    };
+    checkInvariants(raw);
+    const result = cutList({ ...raw, pieces: raw.pieces.map((piece, row) => ({ label: `row ${row}`, ...piece })) });
+    expect(result.boardCount).toBe(2);
+    expect(result.optimal).toBe(false);
+    expect(result.warnings.map((w) => w.code)).toEqual(["planned-on-a-grid"]);
   });
 
   it("gives the same plan every time", () => {
