@@ -8,6 +8,7 @@ import { formatMeasure, type Fraction } from "@/lib/layout";
 import { findKind, type Level } from "@/lib/problems";
 import { roundedAnswer } from "@/lib/problems/kit";
 import type { Role } from "@/models";
+import { signInCookie } from "./http";
 
 export const FIXTURE_PASSWORD = "plumb-and-level-42";
 let hash: string | undefined;
@@ -28,6 +29,16 @@ export async function createPerson(file: string, name: string, role: Role = "stu
   const email = `${name.toLowerCase().replace(/[^a-z]+/g, ".")}.${unique()}@fixtures.example`;
   const user = await withDatabase(file, (db) => db.models.User.create({ name, email, passwordHash: hash!, role }));
   return { id: user.id, email, name };
+}
+
+export type SignedInPerson = { id: number; email: string; name: string; cookie: string };
+
+/** A new person of the app at `baseURL` (its database `file`), signed in, with the cookie to send. */
+export async function signedInPerson(baseURL: string, file: string, name: string, role: Role = "student"): Promise<SignedInPerson> {
+  const made = await createPerson(file, name, role);
+  const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
+  if (!cookie) throw new Error(`could not sign in ${made.email}`);
+  return { ...made, cookie };
 }
 
 export async function createClass(file: string, instructorId: number, studentIds: number[], name = `CARP 120 — Framing ${unique()}`): Promise<number> {
@@ -80,6 +91,27 @@ export async function createAssignment(file: string, classId: number, options: F
     }
     return { id: row.id, itemIds };
   });
+}
+
+/**
+ * The assignment builder's whole form as its API takes it: one even-gap item, three tries, late
+ * work taken at a 10% penalty, open since yesterday and due in a week; `overrides` replace fields.
+ */
+export function builderAssignmentBody(overrides: Record<string, unknown> = {}) {
+  const now = Date.now();
+  return {
+    title: "Battens on the hallway wall",
+    instructions: "Work each layout from the **left end**.",
+    opensAt: new Date(now - DAY).toISOString(),
+    dueAt: new Date(now + 7 * DAY).toISOString(),
+    latePolicy: "penalty",
+    lateUntil: null,
+    latePenaltyPercent: 10,
+    attemptsAllowed: 3,
+    reveal: "when-final",
+    items: [{ kind: "even-gap", level: 1, problemCount: 2, tolerance: "half", points: 5 }],
+    ...overrides,
+  };
 }
 
 export async function updateAssignment(file: string, id: number, values: FixtureAssignment): Promise<void> {
