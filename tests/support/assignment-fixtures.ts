@@ -118,19 +118,29 @@ export async function updateAssignment(file: string, id: number, values: Fixture
   await withDatabase(file, (db) => db.models.Assignment.update(values, { where: { id } }));
 }
 
-/** What a student's variant asks and answers, rebuilt the way the server does from the app's secret. */
-export function variantAnswers(secret: string, itemId: number, studentId: number, variant: number, kindKey: string, level: Level) {
+/**
+ * A problem as its seed makes it, with answers for each part: `right` as a carpenter writes it (to
+ * the part's graduation, counts whole) and `wrong` off by `wrongBy` (a count by `count`, a length by
+ * `length` inches), so it can never round to the right mark.
+ */
+export function answersFor(kindKey: string, seed: number, level: Level, wrongBy = { count: 5, length: 9 }) {
   const kind = findKind(kindKey)!;
-  const seed = variantSeed(secret, itemId, studentId, variant);
   const params = kind.generate(seed, level);
   const expected = kind.solve(params);
   const parts = kind.parts(params);
   const right = Object.fromEntries(parts.map((p) => [p.key, p.answer === "count" ? expected[p.key].toString() : roundedAnswer(expected[p.key], p.precision).toFraction(true)]));
-  const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? 5 : 9).toFraction(true)]));
+  const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? wrongBy.count : wrongBy.length).toFraction(true)]));
   // What a leak would look like in JSON: the rounded texts carpenters write, and the exact rationals.
   const leaks = parts.flatMap((p) => {
     const v: Fraction = expected[p.key];
+    // A whole number alone could match any id or float in the reply; its inch text (14\") cannot.
     return p.answer === "count" ? [] : [formatMeasure(v, { denominator: p.precision }).text.replace(/"/g, '\\"'), v.toFraction(), v.toFraction(true)].filter((t) => /["/]/.test(t));
   });
-  return { seed, kind, params, parts, expected, right, wrong, leaks };
+  return { kind, params, parts, expected, right, wrong, leaks };
+}
+
+/** What a student's variant asks and answers, rebuilt the way the server does from the app's secret. */
+export function variantAnswers(secret: string, itemId: number, studentId: number, variant: number, kindKey: string, level: Level) {
+  const seed = variantSeed(secret, itemId, studentId, variant);
+  return { seed, ...answersFor(kindKey, seed, level) };
 }
