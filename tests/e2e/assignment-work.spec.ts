@@ -1,9 +1,8 @@
-import { expect, test, type Locator } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { QueryTypes } from "sequelize";
 import { findKind, type Level } from "@/lib/problems";
-import { roundedAnswer } from "@/lib/problems/kit";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
-import { expectSignedInAs, signIn } from "./helpers";
+import { answersFor, createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
+import { expectSignedInAs, fillAnswers, signIn } from "./helpers";
 
 const file = process.env.E2E_DATABASE_PATH!;
 const KIND = findKind("even-gap")!;
@@ -21,18 +20,7 @@ async function variantsOf(studentEmail: string, assignmentId: number) {
       { replacements: [studentEmail, assignmentId], type: QueryTypes.SELECT },
     ),
   );
-  return rows.map(({ seed }) => {
-    const params = KIND.generate(seed, LEVEL);
-    const expected = KIND.solve(params);
-    const parts = KIND.parts(params);
-    const right = Object.fromEntries(parts.map((p) => [p.key, p.answer === "count" ? expected[p.key].toString() : roundedAnswer(expected[p.key], p.precision).toFraction(true)]));
-    const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? 3 : 7).toFraction(true)]));
-    return { parts, right, wrong };
-  });
-}
-
-async function fill(problem: Locator, parts: { key: string; label: string }[], answers: Record<string, string>) {
-  for (const part of parts) await problem.getByRole("textbox", { name: part.label }).fill(answers[part.key]);
+  return rows.map(({ seed }) => answersFor(KIND.key, seed, LEVEL, { count: 3, length: 7 }));
 }
 
 test.describe.serial("doing an assignment", () => {
@@ -61,14 +49,14 @@ test.describe.serial("doing an assignment", () => {
 
     const [first] = await variantsOf(setup.student.email, setup.assignmentId);
     const problem = problems.first();
-    await fill(problem, first.parts, first.wrong);
+    await fillAnswers(problem, first.parts, first.wrong);
     await problem.getByRole("textbox", { name: first.parts[0].label }).press("Enter");
     await expect(problem.locator("[data-verdict]").first()).toHaveAttribute("data-verdict", /incorrect|imprecise/);
     await expect(problem.getByText("2 tries left.")).toBeVisible();
     await expect(problem.locator("[data-solution]")).toHaveCount(0);
     await expect(problem.locator("[data-try]")).toHaveCount(1);
 
-    await fill(problem, first.parts, first.right);
+    await fillAnswers(problem, first.parts, first.right);
     await problem.getByRole("button", { name: "Check answers" }).click();
     const solution = problem.locator("[data-solution]");
     await expect(solution).toContainText("Solved");

@@ -1,14 +1,13 @@
 import crypto from "node:crypto";
 import bcrypt from "bcryptjs";
 import sharp from "sharp";
-import { expect, test, type Locator } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { QueryTypes } from "sequelize";
 import { openDatabase } from "@/lib/db";
 import { findKind } from "@/lib/problems";
-import { roundedAnswer } from "@/lib/problems/kit";
 import { linkIn, waitForMail } from "../support/mail-catcher";
-import { withDatabase } from "../support/assignment-fixtures";
-import { expectSignedInAs, signIn } from "./helpers";
+import { answersFor, withDatabase } from "../support/assignment-fixtures";
+import { expectSignedInAs, fillAnswers, signIn } from "./helpers";
 
 // One class from start to finish, through the pages only: the instructor makes the class and imports
 // a roster, the student joins from the e-mailed invitation, the instructor builds and publishes an
@@ -27,7 +26,7 @@ const title = "Wainscot battens, week 1";
 const KIND = findKind("even-gap")!;
 
 /** The right and wrong answers of the student's one stored variant, from the seed the server chose. */
-async function answersFor(assignmentId: number) {
+async function storedVariantAnswers(assignmentId: number) {
   const [{ seed, level }] = await withDatabase(file, (db) =>
     db.sequelize.query<{ seed: number; level: 1 | 2 | 3 }>(
       `SELECT p.seed, p.level FROM practice_problems p JOIN users u ON u.id = p.user_id JOIN assignment_items i ON i.id = p.assignment_item_id
@@ -35,16 +34,7 @@ async function answersFor(assignmentId: number) {
       { replacements: [student.email, assignmentId], type: QueryTypes.SELECT },
     ),
   );
-  const params = KIND.generate(seed, level);
-  const expected = KIND.solve(params);
-  const parts = KIND.parts(params);
-  const right = Object.fromEntries(parts.map((p) => [p.key, p.answer === "count" ? expected[p.key].toString() : roundedAnswer(expected[p.key], p.precision).toFraction(true)]));
-  const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? 3 : 7).toFraction(true)]));
-  return { parts, right, wrong };
-}
-
-async function fill(problem: Locator, parts: { key: string; label: string }[], answers: Record<string, string>) {
-  for (const part of parts) await problem.getByRole("textbox", { name: part.label }).fill(answers[part.key]);
+  return answersFor(KIND.key, seed, level, { count: 3, length: 7 });
 }
 
 test.beforeAll(async () => {
@@ -107,13 +97,13 @@ test("a class from roster import to a graded assignment with a shop photo", asyn
   await expect(learner.getByRole("heading", { level: 1, name: title })).toBeVisible();
   const problem = learner.getByRole("article").first();
   await expect(problem).toBeVisible();
-  const { parts, right, wrong } = await answersFor(assignmentId);
-  await fill(problem, parts, wrong);
+  const { parts, right, wrong } = await storedVariantAnswers(assignmentId);
+  await fillAnswers(problem, parts, wrong);
   await problem.getByRole("button", { name: "Check answers" }).click();
   await expect(problem.locator('[data-verdict="incorrect"], [data-verdict="imprecise"]').first()).toBeVisible();
   await expect(problem.getByText("2 tries left.")).toBeVisible();
   await expect(problem.locator("[data-solution]")).toHaveCount(0);
-  await fill(problem, parts, right);
+  await fillAnswers(problem, parts, right);
   await problem.getByRole("button", { name: "Check answers" }).click();
   await expect(problem.locator("[data-solution]")).toContainText("Solved");
   await expect(learner.locator("[data-score]")).toContainText("4 / 4");

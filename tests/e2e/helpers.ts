@@ -1,4 +1,4 @@
-import { expect, type Page } from "@playwright/test";
+import { expect, type Locator, type Page } from "@playwright/test";
 import { DEMO_PASSWORD } from "@/seeders/demo";
 
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
@@ -10,4 +10,9 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
 
 export async function expectSignedInAs(page: Page, name: string) {
   await expect(page.getByLabel(`Account menu for ${name}`)).toBeVisible();
+}
+
+/** Types each part's answer into its labelled box within one problem. */
+export async function fillAnswers(problem: Locator, parts: { key: string; label: string }[], answers: Record<string, string>) {
+  for (const part of parts) await problem.getByRole("textbox", { name: part.label }).fill(answers[part.key]);
 }

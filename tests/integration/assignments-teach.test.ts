@@ -3,6 +3,7 @@ import bcrypt from "bcryptjs";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openDatabase, type Database } from "@/lib/db";
 import { DEMO_PASSWORD, DEMO_STAFF } from "@/seeders/demo";
+import { builderAssignmentBody } from "../support/assignment-fixtures";
 import { signInCookie } from "../support/http";
 import { caughtMail, waitForMail } from "../support/mail-catcher";
 
@@ -56,22 +57,7 @@ async function makeClass(name: string, instructorId: number) {
   return row.id;
 }
 
-function body(overrides: Record<string, unknown> = {}) {
-  const now = Date.now();
-  return {
-    title: "Battens on the hallway wall",
-    instructions: "Work each layout from the **left end**.",
-    opensAt: new Date(now - DAY).toISOString(),
-    dueAt: new Date(now + 7 * DAY).toISOString(),
-    latePolicy: "penalty",
-    lateUntil: null,
-    latePenaltyPercent: 10,
-    attemptsAllowed: 3,
-    reveal: "when-final",
-    items: [{ kind: "even-gap", level: 1, problemCount: 2, tolerance: "half", points: 5 }],
-    ...overrides,
-  };
-}
+const body = builderAssignmentBody;
 
 beforeAll(async () => {
   database = openDatabase(inject("databasePath"));

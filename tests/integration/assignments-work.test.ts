@@ -1,22 +1,16 @@
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { DAY_MS_FOR_TESTS, recomputedScores } from "../support/assignment-scores";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, updateAssignment, variantAnswers, withDatabase } from "../support/assignment-fixtures";
-import { signInCookie } from "../support/http";
+import { createAssignment, createClass, createPerson, signedInPerson, updateAssignment, variantAnswers, withDatabase, type SignedInPerson } from "../support/assignment-fixtures";
 
 const baseURL = inject("baseURL");
 const file = inject("databasePath");
 const secret = inject("secret");
 const KIND = "even-gap";
 
-type Person = { id: number; email: string; name: string; cookie: string };
+type Person = SignedInPerson;
 type ProblemJson = { id: string; status: string; final: unknown; attemptsUsed: number; promptHtml: string; figure: unknown; earned: number; accepting: boolean; solutionAfter: string | null; tries: { late: boolean }[] };
 
-async function person(name: string, role: "student" | "instructor" = "student"): Promise<Person> {
-  const made = await createPerson(file, name, role);
-  const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
-  if (!cookie) throw new Error(`could not sign in ${made.email}`);
-  return { ...made, cookie };
-}
+const person = (name: string, role: "student" | "instructor" = "student") => signedInPerson(baseURL, file, name, role);
 
 async function call(who: Person | null, path: string, body?: unknown): Promise<Response> {
   return fetch(`${baseURL}${path}`, {

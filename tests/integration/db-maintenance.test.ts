@@ -8,9 +8,8 @@ import { backupDatabase, type BackupResult } from "@/lib/backup";
 import { openDatabase } from "@/lib/db";
 import { migrateUp, migrator } from "@/lib/migrator";
 import { prepareDatabase } from "@/lib/setup";
-import { createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
+import { signedInPerson, withDatabase } from "../support/assignment-fixtures";
 import { freePort } from "../support/free-port";
-import { signInCookie } from "../support/http";
 import { AppProcess, sessionCookie } from "../support/load-run";
 
 const baseURL = inject("baseURL");
@@ -78,10 +77,8 @@ describe("online backup and restore", () => {
   beforeAll(async () => {
     writers = await Promise.all(
       ["Bea Backup", "Cal Backup", "Dee Backup"].map(async (name) => {
-        const person = await createPerson(databasePath, name);
-        const cookie = await signInCookie(baseURL, person.email, FIXTURE_PASSWORD);
-        if (!cookie) throw new Error(`could not sign in ${person.email}`);
-        return { userId: person.id, cookie };
+        const person = await signedInPerson(baseURL, databasePath, name);
+        return { userId: person.id, cookie: person.cookie };
       }),
     );
   });

@@ -7,7 +7,7 @@ import fc from "fast-check";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startApp, type RunningApp } from "../support/app-server";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
+import { builderAssignmentBody, createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
 import { signInCookie } from "../support/http";
 
 // Random bodies per route, plus the fixed hostile ones below: about three minutes for the whole
@@ -69,18 +69,7 @@ beforeAll(async () => {
   const uploadId: string = (await upload.json()).upload.id;
 
   const now = Date.now();
-  const assignmentBody = {
-    title: "Battens on the hallway wall",
-    instructions: "Work each layout from the left end.",
-    opensAt: new Date(now - DAY).toISOString(),
-    dueAt: new Date(now + 7 * DAY).toISOString(),
-    latePolicy: "penalty",
-    lateUntil: null,
-    latePenaltyPercent: 10,
-    attemptsAllowed: 3,
-    reveal: "when-final",
-    items: [{ kind: "even-gap", level: 1, problemCount: 2, tolerance: "half", points: 5 }],
-  };
+  const assignmentBody = builderAssignmentBody();
   const a = `/api/assignments/${open.id}`;
   const c = `/api/classes/${shop}`;
   routes = [

@@ -2,9 +2,8 @@ import Papa from "papaparse";
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import type { Gradebook, OverrideEntry } from "@/lib/gradebook/types";
 import { recomputedScores } from "../support/assignment-scores";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
+import { createAssignment, createClass, signedInPerson, withDatabase, type SignedInPerson } from "../support/assignment-fixtures";
 import { generateTries, randomFrom } from "../support/gradebook-data";
-import { signInCookie } from "../support/http";
 import { waitForMail } from "../support/mail-catcher";
 
 // The gradebook over real HTTP against the built app, real SQLite and maildev. The class, its
@@ -16,14 +15,9 @@ const file = inject("databasePath");
 const secret = inject("secret");
 const DAY = 24 * 3600 * 1000;
 
-type Person = { id: number; email: string; name: string; cookie: string };
+type Person = SignedInPerson;
 
-async function person(name: string, role: "student" | "instructor" = "student"): Promise<Person> {
-  const made = await createPerson(file, name, role);
-  const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
-  if (!cookie) throw new Error(`could not sign in ${made.email}`);
-  return { ...made, cookie };
-}
+const person = (name: string, role: "student" | "instructor" = "student") => signedInPerson(baseURL, file, name, role);
 
 async function call(who: Person | null, path: string, body?: unknown, raw = false): Promise<Response> {
   return fetch(`${baseURL}${path}`, {

@@ -1,8 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { QueryTypes } from "sequelize";
 import { beforeAll, describe, expect, inject, it } from "vitest";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
-import { signInCookie } from "../support/http";
+import { createAssignment, createClass, createPerson, signedInPerson, withDatabase } from "../support/assignment-fixtures";
 
 const baseURL = inject("baseURL");
 const file = inject("databasePath");
@@ -10,12 +9,7 @@ const KIND = "even-gap";
 
 type Who = { id: number | null; cookie: string };
 
-async function student(name: string): Promise<Who> {
-  const made = await createPerson(file, name);
-  const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
-  if (!cookie) throw new Error(`could not sign in ${made.email}`);
-  return { id: made.id, cookie };
-}
+const student = (name: string): Promise<Who> => signedInPerson(baseURL, file, name);
 
 function post(who: Who, path: string, body: unknown, key?: string): Promise<Response> {
   return fetch(`${baseURL}${path}`, {

@@ -1,9 +1,8 @@
 import { describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/lib/db";
-import { formatMeasure, type Fraction } from "@/lib/layout";
 import { findKind, type Level } from "@/lib/problems";
-import { roundedAnswer } from "@/lib/problems/kit";
 import { DEMO_PASSWORD, DEMO_STUDENTS } from "@/seeders/demo";
+import { answersFor } from "../support/assignment-fixtures";
 import { signInCookie } from "../support/http";
 
 const baseURL = inject("baseURL");
@@ -46,21 +45,7 @@ async function storedAttempts(id: string) {
   return { rows, problem };
 }
 
-function expectedFor(level: Level) {
-  const kind = findKind(KIND)!;
-  const params = kind.generate(FIXED_SEED, level);
-  const expected = kind.solve(params);
-  const parts = kind.parts(params);
-  const right = Object.fromEntries(parts.map((p) => [p.key, p.answer === "count" ? expected[p.key].toString() : roundedAnswer(expected[p.key], p.precision).toFraction(true)]));
-  const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? 5 : 9).toFraction(true)]));
-  // What a leak would look like in JSON: the rounded texts carpenters write, and the exact rationals.
-  const leaks = parts.flatMap((p) => {
-    const v: Fraction = expected[p.key];
-    // A whole number alone could match any id or float in the reply; its inch text (14\") cannot.
-    return p.answer === "count" ? [] : [formatMeasure(v, { denominator: p.precision }).text.replace(/"/g, '\\"'), v.toFraction(), v.toFraction(true)].filter((t) => /["/]/.test(t));
-  });
-  return { parts, right, wrong, leaks };
-}
+const expectedFor = (level: Level) => answersFor(KIND, FIXED_SEED, level);
 
 async function newPinnedProblem(c: Client, level: Level = 1) {
   const res = await c.call("/api/practice", { kind: KIND, level });

@@ -5,7 +5,7 @@ import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { newInvitationToken } from "@/lib/classes/tokens";
 import { startApp, type RunningApp } from "../support/app-server";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, withDatabase } from "../support/assignment-fixtures";
+import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, signedInPerson, withDatabase } from "../support/assignment-fixtures";
 import { signInCookie } from "../support/http";
 import { startMailCatcher, type MailCatcher } from "../support/mail-catcher";
 import { cameraPhoto } from "../unit/uploads/sample-images";
@@ -54,12 +54,7 @@ async function expectRateLimited(res: Response): Promise<{ error: { code: string
   return body;
 }
 
-async function person(name: string, role: "student" | "instructor" = "student") {
-  const made = await createPerson(app.databasePath, name, role);
-  const cookie = await signInCookie(app.url, made.email, FIXTURE_PASSWORD);
-  if (!cookie) throw new Error(`could not sign in ${made.email}`);
-  return { ...made, cookie };
-}
+const person = (name: string, role: "student" | "instructor" = "student") => signedInPerson(app.url, app.databasePath, name, role);
 
 const count = (model: "User" | "PasswordReset" | "EmailOutbox" | "Invitation" | "Enrollment" | "Upload" | "Attempt", where: Record<string, unknown> = {}) =>
   withDatabase(app.databasePath, (db) => (db.models[model] as unknown as { count: (o: object) => Promise<number> }).count({ where }));

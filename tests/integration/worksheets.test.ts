@@ -1,21 +1,15 @@
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { formatMeasure } from "@/lib/layout";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, variantAnswers, withDatabase } from "../support/assignment-fixtures";
-import { signInCookie } from "../support/http";
+import { createAssignment, createClass, createPerson, signedInPerson, variantAnswers, withDatabase, type SignedInPerson } from "../support/assignment-fixtures";
 
 const baseURL = inject("baseURL");
 const file = inject("databasePath");
 const secret = inject("secret");
 const KIND = "even-gap";
 
-type Person = { id: number; email: string; name: string; cookie: string };
+type Person = SignedInPerson;
 
-async function person(name: string, role: "student" | "instructor" = "student"): Promise<Person> {
-  const made = await createPerson(file, name, role);
-  const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
-  if (!cookie) throw new Error(`could not sign in ${made.email}`);
-  return { ...made, cookie };
-}
+const person = (name: string, role: "student" | "instructor" = "student") => signedInPerson(baseURL, file, name, role);
 
 async function page(who: Person, path: string): Promise<{ status: number; html: string }> {
   const res = await fetch(`${baseURL}${path}`, { headers: { cookie: who.cookie }, redirect: "manual" });

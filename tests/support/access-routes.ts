@@ -8,6 +8,7 @@
 import crypto from "node:crypto";
 import type { Cast, Principal, World } from "./access-world";
 import { shopPhoto, studentAnswers } from "./access-world";
+import { builderAssignmentBody } from "./assignment-fixtures";
 
 export type Expectation = Record<Principal, number>;
 type Ctx = { world: World; cast: Cast; who: Principal; secret: string };
@@ -32,25 +33,11 @@ const teachingRole = (ok: number): Expectation => ({ anonymous: 401, student: 40
 /** `student`'s own; everyone else is told it does not exist. */
 const studentsOwn = (ok: number): Expectation => ({ anonymous: 401, student: ok, otherStudent: 404, instructor: 404, otherInstructor: 404, admin: 404 });
 
-const DAY = 24 * 3600 * 1000;
 const unique = () => crypto.randomBytes(4).toString("hex");
 
-/** The builder's whole form, as the fixtures' assignment has it (one even-gap item, three tries). */
-function assignmentBody(title: string) {
-  const now = Date.now();
-  return {
-    title,
-    instructions: "Work each layout from the left end.",
-    opensAt: new Date(now - DAY).toISOString(),
-    dueAt: new Date(now + 7 * DAY).toISOString(),
-    latePolicy: "none",
-    lateUntil: null,
-    latePenaltyPercent: null,
-    attemptsAllowed: 3,
-    reveal: "when-final",
-    items: [{ kind: "even-gap", level: 1, problemCount: 2, tolerance: "half", points: 4 }],
-  };
-}
+/** The builder's whole form, as the fixtures' assignment has it (one even-gap item, three tries, no late work). */
+const assignmentBody = (title: string) =>
+  builderAssignmentBody({ title, latePolicy: "none", latePenaltyPercent: null, items: [{ kind: "even-gap", level: 1, problemCount: 2, tolerance: "half", points: 4 }] });
 
 const A = ({ world }: Ctx) => world.classA;
 const asg = ({ world }: Ctx) => world.assignmentA;

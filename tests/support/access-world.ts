@@ -6,8 +6,7 @@ import path from "node:path";
 import sharp from "sharp";
 import { hashResetToken } from "@/lib/accounts/password-reset";
 import { hashToken } from "@/lib/classes/tokens";
-import { createAssignment, createClass, createPerson, FIXTURE_PASSWORD, variantAnswers, withDatabase } from "./assignment-fixtures";
-import { signInCookie } from "./http";
+import { createAssignment, createClass, createPerson, signedInPerson, variantAnswers, withDatabase } from "./assignment-fixtures";
 
 export const PRINCIPALS = ["anonymous", "student", "otherStudent", "instructor", "otherInstructor", "admin"] as const;
 export type Principal = (typeof PRINCIPALS)[number];
@@ -66,12 +65,7 @@ export function requester(baseURL: string, cast: Cast): Requester {
 }
 
 export async function makeCast(baseURL: string, file: string): Promise<Cast> {
-  const signed = async (name: string, role: "student" | "instructor" | "admin"): Promise<Person> => {
-    const made = await createPerson(file, name, role);
-    const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
-    if (!cookie) throw new Error(`could not sign in ${made.email}`);
-    return { ...made, cookie };
-  };
+  const signed = (name: string, role: "student" | "instructor" | "admin"): Promise<Person> => signedInPerson(baseURL, file, name, role);
   return {
     student: await signed("Avery Plumb", "student"),
     otherStudent: await signed("Odette Square", "student"),

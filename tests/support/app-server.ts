@@ -4,6 +4,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { prepareDatabase } from "@/lib/setup";
+import { whenHealthy } from "./child-service";
 import { freePort } from "./free-port";
 
 export type RunningApp = { url: string; databasePath: string; secret: string; stop: () => Promise<void> };
@@ -31,29 +32,6 @@ export async function startApp({ seed = true, env: extraEnv = {} }: { seed?: boo
     env: { ...process.env, NODE_ENV: "production", DATABASE_PATH: databasePath, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: url, BCRYPT_COST: "10", ...extraEnv },
     stdio: ["ignore", "pipe", "pipe"],
   });
-  let output = "";
-  child.stdout?.on("data", (d) => (output += d));
-  child.stderr?.on("data", (d) => (output += d));
-
-  const stop = async () => {
-    if (child.exitCode === null) {
-      child.kill("SIGTERM");
-      await new Promise((resolve) => child.once("exit", resolve));
-    }
-    fs.rmSync(dir, { recursive: true, force: true });
-  };
-
-  const deadline = Date.now() + 30_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`The app exited during start-up:\n${output}`);
-    try {
-      const res = await fetch(`${url}/api/health`);
-      if (res.ok) return { url, databasePath, secret, stop };
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  await stop();
-  throw new Error(`The app did not answer /api/health within 30 s:\n${output}`);
+  const stop = await whenHealthy(child, { name: "The app", dir, healthUrl: `${url}/api/health`, withinMs: 30_000, pollMs: 200 });
+  return { url, databasePath, secret, stop };
 }

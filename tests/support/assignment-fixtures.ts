@@ -8,6 +8,7 @@ import { formatMeasure, type Fraction } from "@/lib/layout";
 import { findKind, type Level } from "@/lib/problems";
 import { roundedAnswer } from "@/lib/problems/kit";
 import type { Role } from "@/models";
+import { signInCookie } from "./http";
 
 export const FIXTURE_PASSWORD = "plumb-and-level-42";
 let hash: string | undefined;
@@ -28,6 +29,16 @@ export async function createPerson(file: string, name: string, role: Role = "stu
   const email = `${name.toLowerCase().replace(/[^a-z]+/g, ".")}.${unique()}@fixtures.example`;
   const user = await withDatabase(file, (db) => db.models.User.create({ name, email, passwordHash: hash!, role }));
   return { id: user.id, email, name };
+}
+
+export type SignedInPerson = { id: number; email: string; name: string; cookie: string };
+
+/** A new person of the app at `baseURL` (its database `file`), signed in, with the cookie to send. */
+export async function signedInPerson(baseURL: string, file: string, name: string, role: Role = "student"): Promise<SignedInPerson> {
+  const made = await createPerson(file, name, role);
+  const cookie = await signInCookie(baseURL, made.email, FIXTURE_PASSWORD);
+  if (!cookie) throw new Error(`could not sign in ${made.email}`);
+  return { ...made, cookie };
 }
 
 export async function createClass(file: string, instructorId: number, studentIds: number[], name = `CARP 120 — Framing ${unique()}`): Promise<number> {
@@ -82,23 +93,54 @@ export async function createAssignment(file: string, classId: number, options: F
   });
 }
 
+/**
+ * The assignment builder's whole form as its API takes it: one even-gap item, three tries, late
+ * work taken at a 10% penalty, open since yesterday and due in a week; `overrides` replace fields.
+ */
+export function builderAssignmentBody(overrides: Record<string, unknown> = {}) {
+  const now = Date.now();
+  return {
+    title: "Battens on the hallway wall",
+    instructions: "Work each layout from the **left end**.",
+    opensAt: new Date(now - DAY).toISOString(),
+    dueAt: new Date(now + 7 * DAY).toISOString(),
+    latePolicy: "penalty",
+    lateUntil: null,
+    latePenaltyPercent: 10,
+    attemptsAllowed: 3,
+    reveal: "when-final",
+    items: [{ kind: "even-gap", level: 1, problemCount: 2, tolerance: "half", points: 5 }],
+    ...overrides,
+  };
+}
+
 export async function updateAssignment(file: string, id: number, values: FixtureAssignment): Promise<void> {
   await withDatabase(file, (db) => db.models.Assignment.update(values, { where: { id } }));
 }
 
-/** What a student's variant asks and answers, rebuilt the way the server does from the app's secret. */
-export function variantAnswers(secret: string, itemId: number, studentId: number, variant: number, kindKey: string, level: Level) {
+/**
+ * A problem as its seed makes it, with answers for each part: `right` as a carpenter writes it (to
+ * the part's graduation, counts whole) and `wrong` off by `wrongBy` (a count by `count`, a length by
+ * `length` inches), so it can never round to the right mark.
+ */
+export function answersFor(kindKey: string, seed: number, level: Level, wrongBy = { count: 5, length: 9 }) {
   const kind = findKind(kindKey)!;
-  const seed = variantSeed(secret, itemId, studentId, variant);
   const params = kind.generate(seed, level);
   const expected = kind.solve(params);
   const parts = kind.parts(params);
   const right = Object.fromEntries(parts.map((p) => [p.key, p.answer === "count" ? expected[p.key].toString() : roundedAnswer(expected[p.key], p.precision).toFraction(true)]));
-  const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? 5 : 9).toFraction(true)]));
+  const wrong = Object.fromEntries(parts.map((p) => [p.key, expected[p.key].add(p.answer === "count" ? wrongBy.count : wrongBy.length).toFraction(true)]));
   // What a leak would look like in JSON: the rounded texts carpenters write, and the exact rationals.
   const leaks = parts.flatMap((p) => {
     const v: Fraction = expected[p.key];
+    // A whole number alone could match any id or float in the reply; its inch text (14\") cannot.
     return p.answer === "count" ? [] : [formatMeasure(v, { denominator: p.precision }).text.replace(/"/g, '\\"'), v.toFraction(), v.toFraction(true)].filter((t) => /["/]/.test(t));
   });
-  return { seed, kind, params, parts, expected, right, wrong, leaks };
+  return { kind, params, parts, expected, right, wrong, leaks };
+}
+
+/** What a student's variant asks and answers, rebuilt the way the server does from the app's secret. */
+export function variantAnswers(secret: string, itemId: number, studentId: number, variant: number, kindKey: string, level: Level) {
+  const seed = variantSeed(secret, itemId, studentId, variant);
+  return { seed, ...answersFor(kindKey, seed, level) };
 }

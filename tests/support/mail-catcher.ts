@@ -2,6 +2,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import { whenHealthy } from "./child-service";
 import { freePort } from "./free-port";
 
 export type CaughtMail = {
@@ -26,29 +27,10 @@ export async function startMailCatcher(): Promise<MailCatcher> {
     [path.join(root, "node_modules/maildev/dist/bin/maildev.js"), "--ip", "127.0.0.1", "--web-ip", "127.0.0.1", "-s", String(smtp), "-w", String(web), "--mail-directory", dir, "--silent"],
     { stdio: ["ignore", "ignore", "pipe"] },
   );
-  let output = "";
-  child.stderr?.on("data", (d) => (output += d));
-  const stop = async () => {
-    if (child.exitCode === null) {
-      child.kill("SIGTERM");
-      await new Promise((resolve) => child.once("exit", resolve));
-    }
-    fs.rmSync(dir, { recursive: true, force: true });
-  };
   const apiUrl = `http://127.0.0.1:${web}`;
   // A loaded machine (a build running beside the tests) can take well over 20 s to start it.
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`maildev exited during start-up:\n${output}`);
-    try {
-      if ((await fetch(`${apiUrl}/api/healthz`)).ok) return { smtpUrl: `smtp://127.0.0.1:${smtp}`, apiUrl, stop };
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  await stop();
-  throw new Error(`maildev did not start within 60 s:\n${output}`);
+  const stop = await whenHealthy(child, { name: "maildev", dir, healthUrl: `${apiUrl}/api/healthz`, withinMs: 60_000, pollMs: 100 });
+  return { smtpUrl: `smtp://127.0.0.1:${smtp}`, apiUrl, stop };
 }
 
 /** Every message the catcher holds, newest last. */

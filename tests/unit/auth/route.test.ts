@@ -1,19 +1,12 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import { encode } from "next-auth/jwt";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { z } from "zod";
 import type { Role } from "@/models";
+import { ownUnitDatabase } from "../../support/unit-database";
 
-// A real, migrated SQLite file of this file's own; env is read on first use, so set it first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sixteenths-unit-"));
-process.env.DATABASE_PATH = path.join(dir, "unit.sqlite");
-process.env.NEXTAUTH_SECRET = "unit-test-secret-unit-test-secret-1234";
+// The cheapest hash cost the app accepts keeps this file quick; set before the app reads its environment.
 process.env.BCRYPT_COST = "10";
-
-const { prepareDatabase } = await import("@/lib/setup");
-const { db } = await import("@/lib/db");
+const { db } = await ownUnitDatabase();
 const { withAuth } = await import("@/lib/auth/route");
 const { AppError } = await import("@/lib/errors");
 
@@ -21,15 +14,9 @@ let studentId = 0;
 let instructorId = 0;
 
 beforeAll(async () => {
-  await prepareDatabase(process.env.DATABASE_PATH!, { seed: false, bcryptCost: 10 });
   const { User } = db().models;
   studentId = (await User.create({ email: "s@example.com", name: "Stu Dent", role: "student", passwordHash: "x" })).id;
   instructorId = (await User.create({ email: "i@example.com", name: "Inge Structor", role: "instructor", passwordHash: "x" })).id;
-});
-
-afterAll(async () => {
-  await db().sequelize.close();
-  fs.rmSync(dir, { recursive: true, force: true });
 });
 
 async function requestAs(uid: number | null, role: Role = "student"): Promise<Request> {

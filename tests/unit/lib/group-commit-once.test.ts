@@ -1,44 +1,16 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import { randomUUID } from "node:crypto";
 import { QueryTypes } from "sequelize";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
+import { ownUnitDatabase, wrongTry } from "../../support/unit-database";
 
-// A real, migrated SQLite file of this file's own; env is read on first use, so set it first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "sixteenths-unit-"));
-process.env.DATABASE_PATH = path.join(dir, "unit.sqlite");
-process.env.NEXTAUTH_SECRET = "unit-test-secret-unit-test-secret-1234";
-
-const { prepareDatabase } = await import("@/lib/setup");
-const { db } = await import("@/lib/db");
+const { db, problemIds: ids } = await ownUnitDatabase({ openProblems: 4 });
 const { guardedWrite, sqliteDate } = await import("@/lib/group-commit");
-
-const ids = Array.from({ length: 4 }, () => randomUUID());
-
-beforeAll(async () => {
-  await prepareDatabase(process.env.DATABASE_PATH!, { seed: false, bcryptCost: 10 });
-  await db().models.PracticeProblem.bulkCreate(ids.map((id, seed) => ({ id, userId: null, visitorId: "v", kind: "even-gap", level: 1, seed, attemptsAllowed: 3 })));
-});
-
-afterAll(async () => {
-  await db().sequelize.close();
-  fs.rmSync(dir, { recursive: true, force: true });
-});
 
 /** A try at `id` after `used` tries, claiming the visitor's `key` with `reply` as its receipt. */
 function keyedTry(id: string, used: number, key: string, reply: string) {
   const now = sqliteDate(new Date());
   return guardedWrite({
-    table: "practice_problems",
-    id,
-    expect: { status: "open", attempts_used: used },
-    set: { attempts_used: used + 1, status: "open", finished_at: null, updated_at: now },
-    into: {
-      table: "attempts",
-      columns: ["problem_id", "kind", "level", "seed", "submission", "part", "raw", "value", "expected", "verdict", "created_at"],
-      rows: [[id, "even-gap", 1, 0, used + 1, "gap", "1", "1", "2", "incorrect", now]],
-    },
+    ...wrongTry(id, used, { now }),
     once: { table: "answer_receipts", unique: { visitor_id: "v", key }, values: { problem_id: id, submission: used + 1, fingerprint: "f", status: 200, response: reply, created_at: now } },
   });
 }
