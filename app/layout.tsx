@@ -1,6 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import type { ReactNode } from "react";
-import { measureFont, textFont } from "@/components/shell/fonts";
+import { measureFont, textFont, textItalicFont } from "@/components/shell/fonts";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
 import "./globals.css";
@@ -14,7 +14,7 @@ export const viewport: Viewport = { width: "device-width", initialScale: 1, them
 
 export default function RootLayout({ children }: { children: ReactNode }) {
   return (
-    <html lang="en" className={`${textFont.variable} ${measureFont.variable}`}>
+    <html lang="en" className={`${textFont.variable} ${textItalicFont.variable} ${measureFont.variable}`}>
       <body className="flex min-h-dvh flex-col">
         <a href="#main" data-chrome className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-ink focus:p-3 focus:text-paper">
           Skip to content
