@@ -14,23 +14,32 @@ export function NavLinks({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
   const list = useRef<HTMLUListElement>(null);
   const overflows = useSidewaysOverflow(list, false);
-  const [atEnd, setAtEnd] = useState(false);
-  const readEnd = () => {
+  const [edges, setEdges] = useState({ atStart: true, atEnd: false });
+  const readEdges = () => {
     const el = list.current;
-    if (el) setAtEnd(el.scrollLeft + el.clientWidth >= el.scrollWidth - 1);
+    if (el) setEdges({ atStart: el.scrollLeft <= 1, atEnd: el.scrollLeft + el.clientWidth >= el.scrollWidth - 1 });
   };
 
-  // The page's own link is brought into view when it sits past the cut.
+  // The page's own link is brought just into view when it sits past the cut, so the links before
+  // it stay in sight as far as they can.
   useEffect(() => {
     const el = list.current;
     const current = el?.querySelector<HTMLElement>("[aria-current=page]");
-    if (el && current && current.offsetLeft + current.offsetWidth > el.scrollLeft + el.clientWidth) el.scrollLeft = current.offsetLeft;
-    readEnd();
+    const rightEdge = current ? current.offsetLeft + current.offsetWidth : 0;
+    if (el && current && rightEdge > el.scrollLeft + el.clientWidth) el.scrollLeft = rightEdge - el.clientWidth;
+    readEdges();
   }, [pathname, items.length, overflows]);
 
-  const fade = overflows && !atEnd ? "[mask-image:linear-gradient(to_right,black_calc(100%-2.5rem),transparent)]" : "";
+  // Whole class names, so the style sheet is built with each of them.
+  const fade = !overflows
+    ? ""
+    : edges.atStart
+      ? "[mask-image:linear-gradient(to_right,black_calc(100%-2.5rem),transparent)]"
+      : edges.atEnd
+        ? "[mask-image:linear-gradient(to_right,transparent,black_2.5rem)]"
+        : "[mask-image:linear-gradient(to_right,transparent,black_2.5rem,black_calc(100%-2.5rem),transparent)]";
   return (
-    <ul ref={list} onScroll={readEnd} className={`relative flex flex-nowrap items-center gap-1 overflow-x-auto [scrollbar-width:none] ${fade}`} data-nav-overflows={overflows ? "yes" : "no"}>
+    <ul ref={list} onScroll={readEdges} className={`relative flex flex-nowrap items-center gap-1 overflow-x-auto [scrollbar-width:none] ${fade}`} data-nav-overflows={overflows ? "yes" : "no"}>
       {items.map((item) => {
         const current = pathname === item.href || pathname.startsWith(`${item.href}/`);
         return (
