@@ -26,7 +26,8 @@ export function NavLinks({ items }: { items: NavItem[] }) {
     const el = list.current;
     const current = el?.querySelector<HTMLElement>("[aria-current=page]");
     const rightEdge = current ? current.offsetLeft + current.offsetWidth : 0;
-    if (el && current && rightEdge > el.scrollLeft + el.clientWidth) el.scrollLeft = rightEdge - el.clientWidth;
+    // 40 px past it keeps the link clear of the fade at the cut edge.
+    if (el && current && rightEdge > el.scrollLeft + el.clientWidth) el.scrollLeft = rightEdge - el.clientWidth + 40;
     readEdges();
   }, [pathname, items.length, overflows]);
 

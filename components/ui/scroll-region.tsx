@@ -10,11 +10,23 @@ export function useSidewaysOverflow(ref: RefObject<HTMLElement | null>, initial 
     if (!el) return;
     // A pixel of slack: rounding of fractional widths can make an exact fit look one pixel too wide.
     const measure = () => setOverflows(el.scrollWidth > el.clientWidth + 1);
-    const observer = new ResizeObserver(measure);
-    observer.observe(el);
-    for (const child of Array.from(el.children)) observer.observe(child);
+    const resizes = new ResizeObserver(measure);
+    const watchChildren = () => {
+      resizes.observe(el);
+      for (const child of Array.from(el.children)) resizes.observe(child);
+    };
+    // Content added later (the header's links once the session is known) is watched too.
+    const additions = new MutationObserver(() => {
+      watchChildren();
+      measure();
+    });
+    additions.observe(el, { childList: true });
+    watchChildren();
     measure();
-    return () => observer.disconnect();
+    return () => {
+      resizes.disconnect();
+      additions.disconnect();
+    };
   }, [ref]);
   return overflows;
 }

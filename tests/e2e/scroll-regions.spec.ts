@@ -117,6 +117,11 @@ for (const viewport of [phone, tablet, desktop]) {
       // No link is lost: every one is in the main navigation, reachable even where the row is cut.
       const expected = { visitor: [], student: ["My classes", "My progress"], instructor: ["Classes"], admin: ["Classes", "Users", "All classes"] }[account.role]!;
       const nav = page.getByRole("navigation", { name: "Main" });
+      // Where the row is cut, a fade at the cut edge says there is more; where it fits, none.
+      const row = nav.getByRole("list");
+      await expect
+        .poll(() => row.evaluate((el) => `${el.scrollWidth > el.clientWidth + 1} ${getComputedStyle(el).maskImage !== "none"}`))
+        .toMatch(/^(true true|false false)$/);
       for (const label of ["Lessons", "Calculators", "Practice", ...expected]) {
         const link = nav.getByRole("link", { name: label, exact: true });
         await link.focus();

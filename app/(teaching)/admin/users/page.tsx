@@ -49,7 +49,7 @@ export default async function UsersPage({ searchParams }: PageProps<"/admin/user
                 </th>
                 <td className="hidden px-4 py-2 break-all sm:table-cell">{u.email}</td>
                 <td className="px-4 py-2">{u.role}</td>
-                <td className="measure hidden px-4 py-2 sm:table-cell">{u.createdAt.slice(0, 10)}</td>
+                <td className="measure hidden whitespace-nowrap px-4 py-2 sm:table-cell">{u.createdAt.slice(0, 10)}</td>
               </tr>
             ))}
           </tbody>
