@@ -15,6 +15,7 @@ import { useHydrated } from "@/components/ui/use-hydrated";
 import { callApi } from "@/components/ui/call-api";
 import { useServerErrors } from "@/components/ui/use-server-form";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 type Student = { studentId: number; name: string; email: string; status: "active" | "invited" };
 type Values = { studentId: string; dueAt: string; extraAttempts: number | string; note: string };
@@ -78,9 +79,9 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
       {extensions.length === 0 ? (
         <p className="text-ink-soft">No extensions yet. Everyone works to the same due date and {pluralize(attemptsAllowed, "try", "tries")} per problem.</p>
       ) : (
-        <div className="card overflow-x-auto">
+        <ScrollRegion labelledBy="extensions-caption">
           <table className="w-full text-left text-sm" data-extensions>
-            <caption className="sr-only">Students with an extension</caption>
+            <caption id="extensions-caption" className="sr-only">Students with an extension</caption>
             <thead className="border-b border-rule bg-paper-sunk">
               <tr>
                 <th scope="col" className="px-3 py-2">Student</th>
@@ -124,7 +125,7 @@ export function ExtensionsPanel({ assignmentId, roster, initial, dueAt, attempts
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       )}
 
       {done ? <Alert tone="success">{done}</Alert> : null}

@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { StudentScore } from "@/lib/assignments/scores";
 import { LocalTime } from "@/components/ui/local-time";
 import { LateFlag, StudentStatusBadge } from "./student-status-badge";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 export type SubmissionSort = { key: "name" | "score"; dir: "asc" | "desc" };
 
@@ -24,9 +25,9 @@ function SortHeader({ label, column, sort, href }: { label: string; column: Subm
 /** Every student's standing on one assignment; names link to their work. */
 export function SubmissionsTable({ rows, sort, sortHref, studentHref, caption }: { rows: StudentScore[]; sort: SubmissionSort; sortHref: (s: SubmissionSort) => string; studentHref: (id: number) => string; caption: string }) {
   return (
-    <div className="card overflow-x-auto">
+    <ScrollRegion labelledBy="submissions-caption">
       <table className="w-full text-left text-sm">
-        <caption className="sr-only">{caption}</caption>
+        <caption id="submissions-caption" className="sr-only">{caption}</caption>
         <thead className="border-b border-rule bg-paper-sunk">
           <tr>
             <SortHeader label="Student" column="name" sort={sort} href={sortHref} />
@@ -90,6 +91,6 @@ export function SubmissionsTable({ rows, sort, sortHref, studentHref, caption }:
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

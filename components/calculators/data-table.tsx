@@ -1,4 +1,5 @@
 import { useId, type ReactNode } from "react";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 /** Cell padding for body cells; add `measure` (and `whitespace-nowrap`) where a cell holds a length. */
 export const cell = "px-3 py-1.5";
@@ -35,9 +36,8 @@ type Props = {
 export function DataTable({ caption, columns, children, bodyClassName, foot, note, className, compactPrint, data }: Props) {
   const head = `px-3 py-2${compactPrint ? " print:py-1" : ""}`;
   const captionId = useId();
-  // The card is a named stop in the tab order so a keyboard user can scroll a wide table on a phone.
   return (
-    <div className={`card overflow-x-auto${className ? ` ${className}` : ""}`} tabIndex={0} role="region" aria-labelledby={captionId} {...data}>
+    <ScrollRegion labelledBy={captionId} className={`card${className ? ` ${className}` : ""}`} data={data}>
       <table className={`w-full text-left text-sm${compactPrint ? " print:text-xs" : ""}`}>
         <caption id={captionId} className="px-3 pt-2 text-left text-sm font-semibold">
           {caption}
@@ -55,7 +55,7 @@ export function DataTable({ caption, columns, children, bodyClassName, foot, not
         {foot}
       </table>
       {note}
-    </div>
+    </ScrollRegion>
   );
 }
 

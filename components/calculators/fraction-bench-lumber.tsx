@@ -6,6 +6,7 @@ import { LUMBER_SIZE_TABLE } from "@/lib/layout/lumber";
 import { BenchField, BenchForm, BenchSection } from "./fraction-bench-field";
 import { lumberResult, type BenchDisplay, type FractionBenchValues } from "./fraction-bench-results";
 import { CountReadout, lengthText, ReadoutGrid } from "./readouts";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 type Props = { form: UseFormReturn<FractionBenchValues>; values: FractionBenchValues; display: BenchDisplay };
 
@@ -48,9 +49,9 @@ export function LumberSection({ form, values, display }: Props) {
         <summary className="cursor-pointer font-semibold">Nominal and dressed sizes (PS 20)</summary>
         <div className="mt-2 grid gap-3 sm:grid-cols-2">
           {(["thickness", "width"] as const).map((dimension) => (
-            <div key={dimension} className="card overflow-x-auto">
+            <ScrollRegion key={dimension} labelledBy={`lumber-${dimension}-caption`}>
               <table className="w-full text-left text-sm">
-                <caption className="px-3 pt-2 text-left font-semibold">Nominal {dimension}</caption>
+                <caption id={`lumber-${dimension}-caption`} className="px-3 pt-2 text-left font-semibold">Nominal {dimension}</caption>
                 <thead className="border-b border-rule bg-paper-sunk">
                   <tr>
                     <th scope="col" className="px-3 py-1.5">Nominal</th>
@@ -68,7 +69,7 @@ export function LumberSection({ form, values, display }: Props) {
                   ))}
                 </tbody>
               </table>
-            </div>
+            </ScrollRegion>
           ))}
         </div>
         <p className="mt-2 text-xs text-ink-soft">Green (unseasoned) boards are dressed fuller because they shrink to about the dry size as they dry.</p>

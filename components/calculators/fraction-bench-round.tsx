@@ -7,6 +7,7 @@ import { formatMeasure } from "@/lib/layout/measure";
 import { BenchField, BenchForm, BenchSection } from "./fraction-bench-field";
 import { decimalText, roundingLadder, signedInches, type FractionBenchValues } from "./fraction-bench-results";
 import { RoundingDrawing } from "./fraction-bench-round-drawing";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 type Props = { form: UseFormReturn<FractionBenchValues>; values: FractionBenchValues };
 
@@ -38,9 +39,9 @@ export function RoundSection({ form, values }: Props) {
       {ladder.ok ? (
         <>
           <RoundingDrawing value={ladder.value} rows={ladder.rows} titleId={`${id}-title`} descId={`${id}-desc`} />
-          <div className="card overflow-x-auto">
+          <ScrollRegion labelledBy={`${id}-ladder`}>
             <table className="w-full text-left text-sm">
-              <caption className="px-3 pt-2 text-left text-sm font-semibold">Rounding to each graduation</caption>
+              <caption id={`${id}-ladder`} className="px-3 pt-2 text-left text-sm font-semibold">Rounding to each graduation</caption>
               <thead className="border-b border-rule bg-paper-sunk">
                 <tr>
                   <th scope="col" className="px-3 py-2">Round to</th>
@@ -66,7 +67,7 @@ export function RoundSection({ form, values }: Props) {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
         </>
       ) : (
         <p className="rounded border border-rule bg-paper-sunk p-3 text-sm text-ink-soft">Fix the length to see where it rounds.</p>

@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { RosterEntry } from "@/lib/classes/roster";
 import { LocalTime } from "@/components/ui/local-time";
 import { ActionButton } from "./action-button";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const STATUS_STYLE = {
   active: "bg-ok-bg text-ok",
@@ -81,9 +82,9 @@ function StatusCell({ entry }: { entry: RosterEntry }) {
 
 export function RosterTable({ classId, className, entries, archived }: { classId: number; className: string; entries: RosterEntry[]; archived: boolean }) {
   return (
-    <div className="card overflow-x-auto">
+    <ScrollRegion labelledBy="roster-caption">
       <table className="w-full text-left text-sm">
-        <caption className="sr-only">Students and invitations in {className}</caption>
+        <caption id="roster-caption" className="sr-only">Students and invitations in {className}</caption>
         <thead className="border-b border-rule bg-paper-sunk">
           <tr>
             <th scope="col" className="px-4 py-2">
@@ -122,7 +123,7 @@ export function RosterTable({ classId, className, entries, archived }: { classId
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
 

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import type { HistoryPage } from "@/lib/practice/history";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const STATUS = { open: "In progress", solved: "Solved", failed: "Out of tries" } as const;
 const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
@@ -14,9 +15,9 @@ export function PracticeHistoryTable({ history }: { history: HistoryPage }) {
         <p className="text-ink-soft">Nothing yet. Start a problem above; each one you finish counts toward mastering its skill.</p>
       ) : (
         <>
-          <div className="overflow-x-auto rounded-lg border border-rule">
+          <ScrollRegion labelledBy="practice-history-caption" className="rounded-lg border border-rule">
             <table className="w-full text-left text-sm">
-              <caption className="sr-only">Your practice problems, newest first</caption>
+              <caption id="practice-history-caption" className="sr-only">Your practice problems, newest first</caption>
               <thead className="bg-paper-sunk">
                 <tr>
                   <th scope="col" className="px-3 py-2">Problem</th>
@@ -40,7 +41,7 @@ export function PracticeHistoryTable({ history }: { history: HistoryPage }) {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
           {history.pages > 1 ? (
             <nav aria-label="History pages" className="flex items-center gap-3 text-sm">
               {history.page > 1 ? <Link href={`/practice?page=${history.page - 1}#history`}>Newer</Link> : null}

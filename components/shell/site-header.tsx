@@ -6,14 +6,14 @@ export function SiteHeader() {
   return (
     <header data-chrome className="border-b border-rule bg-paper-raised">
       <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2">
-        <Link href="/" className="flex min-h-touch items-center gap-2 text-ink no-underline">
+        <Link href="/" className="flex min-h-touch shrink-0 items-center gap-2 text-ink no-underline">
           <Logo />
           <span className="text-xl font-bold tracking-tight">Sixteenths</span>
         </Link>
-        <nav aria-label="Main" className="order-last -mx-2 w-full sm:order-none sm:mx-0 sm:w-auto sm:flex-1">
+        <nav aria-label="Main" className="order-last -mx-2 w-full sm:order-none sm:mx-0 sm:w-auto sm:min-w-0 sm:flex-1">
           <HeaderNav />
         </nav>
-        <div className="ml-auto flex items-center gap-2">
+        <div className="ml-auto flex shrink-0 items-center gap-2">
           <HeaderAccount />
         </div>
       </div>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { listUsers } from "@/lib/accounts/users";
 import { requireRole } from "@/lib/auth/session";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 export const metadata: Metadata = { title: "Users" };
 
@@ -18,9 +19,9 @@ export default async function UsersPage({ searchParams }: PageProps<"/admin/user
         <h1 className="text-2xl">Users</h1>
         <p className="text-ink-soft">{total} accounts: instructors, students and program admins.</p>
       </header>
-      <div className="card overflow-x-auto">
+      <ScrollRegion labelledBy="users-caption">
         <table className="w-full text-left text-sm">
-          <caption className="sr-only">
+          <caption id="users-caption" className="sr-only">
             Accounts, page {page} of {pageCount}
           </caption>
           <thead className="border-b border-rule bg-paper-sunk">
@@ -48,12 +49,12 @@ export default async function UsersPage({ searchParams }: PageProps<"/admin/user
                 </th>
                 <td className="hidden px-4 py-2 break-all sm:table-cell">{u.email}</td>
                 <td className="px-4 py-2">{u.role}</td>
-                <td className="measure hidden px-4 py-2 sm:table-cell">{u.createdAt.slice(0, 10)}</td>
+                <td className="measure hidden whitespace-nowrap px-4 py-2 sm:table-cell">{u.createdAt.slice(0, 10)}</td>
               </tr>
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       {pageCount > 1 ? (
         <nav aria-label="Pages" className="flex items-center justify-between gap-3">
           {page > 1 ? (

@@ -7,6 +7,7 @@ import { requireRole } from "@/lib/auth/session";
 import { pluralize } from "@/lib/assignments/teacher-format";
 import { listClassAssignments } from "@/lib/assignments/teacher-views";
 import { idFrom, orPage } from "./guard";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 export const metadata: Metadata = { title: "Assignments" };
 
@@ -53,9 +54,9 @@ export default async function AssignmentsPage({ params, searchParams }: PageProp
         </section>
       ) : (
         <>
-          <div className="card overflow-x-auto">
+          <ScrollRegion labelledBy="assignments-caption">
             <table className="w-full text-left text-sm" data-assignments>
-              <caption className="sr-only">Assignments in {klass.name}, latest due first</caption>
+              <caption id="assignments-caption" className="sr-only">Assignments in {klass.name}, latest due first</caption>
               <thead className="border-b border-rule bg-paper-sunk">
                 <tr>
                   <th scope="col" className="px-4 py-2">Assignment</th>
@@ -97,7 +98,7 @@ export default async function AssignmentsPage({ params, searchParams }: PageProp
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
           {pageCount > 1 ? (
             <nav aria-label="Pages of assignments" className="flex flex-wrap items-center gap-3" data-chrome>
               {current > 1 ? (

@@ -13,6 +13,7 @@ import { REVEAL_LABELS, TOLERANCE_LABELS, latePolicyText, pluralize } from "@/li
 import { duplicateTargets, getTeacherAssignment } from "@/lib/assignments/teacher-views";
 import { classStudents } from "@/lib/classes/roster";
 import { idFrom, orPage } from "../guard";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 export const metadata: Metadata = { title: "Assignment" };
 
@@ -107,9 +108,9 @@ export default async function AssignmentOverviewPage({ params, searchParams }: P
         <h2 id="items-heading" className="text-xl">
           Problems
         </h2>
-        <div className="card overflow-x-auto">
+        <ScrollRegion labelledBy="items-caption">
           <table className="w-full text-left text-sm" data-items>
-            <caption className="sr-only">Items of this assignment</caption>
+            <caption id="items-caption" className="sr-only">Items of this assignment</caption>
             <thead className="border-b border-rule bg-paper-sunk">
               <tr>
                 <th scope="col" className="hidden px-3 py-2 sm:table-cell">#</th>
@@ -155,7 +156,7 @@ export default async function AssignmentOverviewPage({ params, searchParams }: P
               </tr>
             </tfoot>
           </table>
-        </div>
+        </ScrollRegion>
       </section>
 
       <section aria-labelledby="extensions-heading" className="space-y-3">
