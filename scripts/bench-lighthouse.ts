@@ -93,6 +93,24 @@ type Report = {
   audits: Parameters<typeof whatCosts>[0] & Record<string, { numericValue?: number }>;
 };
 
+/**
+ * Lighthouse 12 with Debian's Chromium now and then loses its own trace (NO_NAVSTART, or its trace
+ * engine failing on a missing frame): the run reports nothing about the page, so it is run again,
+ * up to twice, and the retry is said.
+ */
+async function measureAgainOnTraceLoss(url: string, cookie: string | null): Promise<Run> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await measure(url, cookie);
+    } catch (error) {
+      const message = error instanceof Error ? error.message : String(error);
+      const traceLost = /NO_NAVSTART|NO_FCP|recording the trace|frame_sequence/.test(message);
+      if (!traceLost || attempt === 3) throw error;
+      console.log(`  (Lighthouse lost the trace of ${new URL(url).pathname}; running it again)`);
+    }
+  }
+}
+
 async function measure(url: string, cookie: string | null): Promise<Run> {
   const args = [
     LIGHTHOUSE_CLI,
@@ -146,7 +164,7 @@ async function main(argv: string[]) {
     for (const page of pages) {
       const done: Run[] = [];
       for (let i = 0; i < runs; i++) {
-        done.push(await measure(app.url + page.path, page.cookie));
+        done.push(await measureAgainOnTraceLoss(app.url + page.path, page.cookie));
         process.stderr.write(`${page.name} run ${i + 1}/${runs}: score ${done[i].score}, LCP ${(done[i].lcpMs / 1000).toFixed(2)} s, TBT ${Math.round(done[i].tbtMs)} ms\n`);
       }
       version = done[0].version;
