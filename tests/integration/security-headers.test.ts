@@ -51,6 +51,15 @@ async function signIn(url: string, email: string, password: string): Promise<{ r
 
 const flagsOf = (line: string) => line.split(";").map((p) => p.trim().toLowerCase());
 
+/** Signs in through the form and returns the named session cookie's line and its lower-cased flags. */
+async function sessionCookie(url: string, email: string, cookieName: string) {
+  const { res, setCookies } = await signIn(url, email, FIXTURE_PASSWORD);
+  expect(res.status).toBe(200);
+  const session = setCookies.find((line) => line.startsWith(`${cookieName}=`));
+  expect(session, setCookies.join("\n")).toBeTruthy();
+  return { res, setCookies, session: session!, flags: flagsOf(session!) };
+}
+
 describe("security headers", () => {
   it("are on a page, a static file, a font and the not-found page", async () => {
     const home = await fetch(`${baseURL}/`);
@@ -90,12 +99,8 @@ describe("security headers", () => {
 
   it("are on the sign-in POST, whose session cookie is httpOnly and SameSite=Lax over http", async () => {
     const ruth = await createPerson(databasePath, "Ruth Mortise");
-    const { res, setCookies } = await signIn(baseURL, ruth.email, FIXTURE_PASSWORD);
-    expect(res.status).toBe(200);
+    const { res, flags } = await sessionCookie(baseURL, ruth.email, "next-auth.session-token");
     expectSecurityHeaders(res, "sign-in POST");
-    const session = setCookies.find((line) => line.startsWith("next-auth.session-token="));
-    expect(session, setCookies.join("\n")).toBeTruthy();
-    const flags = flagsOf(session!);
     expect(flags).toContain("httponly");
     expect(flags).toContain("samesite=lax");
     expect(flags).toContain("path=/");
@@ -118,17 +123,13 @@ describe("behind an https address", () => {
 
   it("the session cookie is Secure with the __Secure- prefix, and that cookie is the one the app reads", async () => {
     const omar = await createPerson(app.databasePath, "Omar Dado");
-    const { res, setCookies } = await signIn(app.url, omar.email, FIXTURE_PASSWORD);
-    expect(res.status).toBe(200);
+    const { setCookies, session, flags } = await sessionCookie(app.url, omar.email, "__Secure-next-auth.session-token");
     expect(setCookies.some((line) => line.startsWith("next-auth.session-token="))).toBe(false);
-    const session = setCookies.find((line) => line.startsWith("__Secure-next-auth.session-token="));
-    expect(session, setCookies.join("\n")).toBeTruthy();
-    const flags = flagsOf(session!);
     expect(flags).toContain("secure");
     expect(flags).toContain("httponly");
     expect(flags).toContain("samesite=lax");
 
-    const cookie = session!.split(";")[0];
+    const cookie = session.split(";")[0];
     const me = await fetch(`${app.url}/api/me`, { headers: { cookie } });
     expect(me.status).toBe(200);
     expect(((await me.json()) as { user: { email: string } }).user.email).toBe(omar.email);
