@@ -3,8 +3,10 @@ import type { CutListResult } from "@/lib/layout/cut-list";
 import { cell, DataTable, measureCell, rowLine } from "./data-table";
 import { lengthText, type Display } from "./readouts";
 
-const money = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
-export const priceText = (price: number) => money.format(price);
+// Made on first use: building a formatter loads locale data (tens of milliseconds on a phone), and
+// most cut lists have no prices.
+let money: Intl.NumberFormat | undefined;
+export const priceText = (price: number) => (money ??= new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" })).format(price);
 
 /** What to carry out of the lumberyard: a count per stock length, and the cost when every board is priced. */
 export function BuyTable({ result, display, caption = "Boards to buy" }: { result: CutListResult; display: Display; caption?: string }) {

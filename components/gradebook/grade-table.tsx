@@ -14,7 +14,9 @@ type Props = {
 
 // Excused work sorts below every score, whichever way the column is sorted by points.
 const sortValue = (s: GradebookStudent, index: number) => (s.cells[index].excused ? -1 : s.cells[index].earned);
-const shortDate = (iso: string) => new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", timeZone: "UTC" }).format(new Date(iso));
+// One formatter for every column: building one loads locale data, which is slow on a phone.
+let dayFormat: Intl.DateTimeFormat | undefined;
+const shortDate = (iso: string) => (dayFormat ??= new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", timeZone: "UTC" })).format(new Date(iso));
 
 /**
  * The students × assignments grid. Arrow keys move between cells (one tab stop for the whole
