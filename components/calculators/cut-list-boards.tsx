@@ -1,9 +1,7 @@
-"use client";
-
 import type { Fraction } from "@/lib/layout/core";
 import type { BoardPlan, CutListResult } from "@/lib/layout/cut-list";
 import { lengthText, type Display } from "./readouts";
-import { useNarrowCanvas } from "./wall-grid-media";
+import { NarrowOrWide } from "./narrow-or-wide";
 
 const WIDE = 640;
 /** A phone draws on a narrower canvas, so the same label sizes read larger. */
@@ -34,7 +32,15 @@ export function boardsDescription(result: CutListResult, display: Display, trim:
  * from the left end, the kerfs as dark lines, the trimmed end shaded and the offcut hatched.
  */
 export function CutListBoards({ result, display, trim, idPrefix }: { result: CutListResult; display: Display; trim: Fraction; idPrefix: string }) {
-  const narrow = useNarrowCanvas();
+  return (
+    <NarrowOrWide
+      wide={<BoardsCanvas result={result} display={display} trim={trim} idPrefix={idPrefix} narrow={false} />}
+      narrow={<BoardsCanvas result={result} display={display} trim={trim} idPrefix={`${idPrefix}-narrow`} narrow />}
+    />
+  );
+}
+
+function BoardsCanvas({ result, display, trim, idPrefix, narrow }: { result: CutListResult; display: Display; trim: Fraction; idPrefix: string; narrow: boolean }) {
   const WIDTH = narrow ? NARROW : WIDE;
   // On a phone the labels grow a little more than the canvas shrinks them.
   const titleSize = narrow ? 11.5 : 10;

@@ -1,9 +1,7 @@
-"use client";
-
 import type { WallGridResult } from "@/lib/layout/wall-grid";
 import { HDimension, MarkNumber, VDimension } from "./dimension";
 import { lengthText, type Display } from "./readouts";
-import { useNarrowCanvas } from "./wall-grid-media";
+import { NarrowOrWide } from "./narrow-or-wide";
 
 const WIDE = 640;
 /** A phone draws on a narrower canvas, so the same label sizes read larger. */
@@ -50,7 +48,16 @@ export function wallGridDescription(result: WallGridResult, display: Display): s
  * the studs dashed behind, and dimension strings for the wall, one bay and the vertical.
  */
 export function WallGridDrawing({ result, display, idPrefix = "wall-grid" }: { result: WallGridResult; display: Display; idPrefix?: string }) {
-  const WIDTH = useNarrowCanvas({ onPaper: true }) ? NARROW : WIDE;
+  return (
+    <NarrowOrWide
+      onPaper
+      wide={<WallGridCanvas result={result} display={display} idPrefix={idPrefix} width={WIDE} />}
+      narrow={<WallGridCanvas result={result} display={display} idPrefix={`${idPrefix}-narrow`} width={NARROW} />}
+    />
+  );
+}
+
+function WallGridCanvas({ result, display, idPrefix, width: WIDTH }: { result: WallGridResult; display: Display; idPrefix: string; width: number }) {
   const wallWidth = result.wallWidth.valueOf();
   const wallHeight = result.wallHeight.valueOf();
   const scale = Math.min((WIDTH - LEFT - RIGHT) / wallWidth, (MAX_WALL_HEIGHT * WIDTH) / wallHeight);
