@@ -1,9 +1,8 @@
 "use client";
 
-import type { ReactNode } from "react";
+import { useMemo, type ReactNode } from "react";
 import { CopyLinkButton, PrintButton } from "./toolbar-buttons";
 import { SaveLayoutButton } from "./save-layout-button";
-import { useHydrated } from "@/components/ui/use-hydrated";
 import type { CalculatorKind } from "@/lib/calculators";
 
 type Props = {
@@ -31,7 +30,13 @@ function summaryLine(parts: [string, string][] | null): string {
  * hides the inputs and prints the results as a one-page shop sheet.
  */
 export function CalculatorFrame({ kind, title, inputs, results, query, compact = false, signedIn = false, sheetSummary }: Props) {
-  const hydrated = useHydrated();
+  // A calculator keeps its whole state in its query, so its inputs and results are the same while
+  // the query is: handing React the same elements lets it skip them when only the frame changes
+  // (react-hook-form renders once more as it mounts, a render that would redraw every table).
+  /* eslint-disable react-hooks/exhaustive-deps */
+  const sameInputs = useMemo(() => inputs, [query]);
+  const sameResults = useMemo(() => results, [query]);
+  /* eslint-enable react-hooks/exhaustive-deps */
   return (
     <section aria-label={`${title} calculator`} className={compact ? "card @container my-6 space-y-4 p-4" : "space-y-4"} data-calculator={kind}>
       <div className="hidden print:block">
@@ -49,12 +54,13 @@ export function CalculatorFrame({ kind, title, inputs, results, query, compact =
           it goes side by side only when its own box has room for the results' tables and readouts. */}
       <div className={compact ? "grid gap-4 @3xl:grid-cols-[minmax(0,18rem)_1fr] print:block" : "grid gap-6 lg:grid-cols-[minmax(0,22rem)_1fr] print:block"}>
         <form data-chrome noValidate onSubmit={(e) => e.preventDefault()} aria-label={`${title} inputs`} className={compact ? "max-w-md @3xl:max-w-none" : undefined}>
-          <fieldset disabled={!hydrated} className="min-w-0 space-y-3">
-            {inputs}
+          {/* Not disabled while the page hydrates: useUrlForm puts back what was typed meanwhile. */}
+          <fieldset className="min-w-0 space-y-3">
+            {sameInputs}
           </fieldset>
         </form>
         <div className="min-w-0 space-y-4" aria-live="polite">
-          {results}
+          {sameResults}
         </div>
       </div>
       {compact ? (

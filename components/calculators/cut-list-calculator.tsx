@@ -43,7 +43,7 @@ type Props = { initial?: SearchParamsRecord; start?: Partial<CutListValues>; com
 
 export function CutListCalculator({ initial, start, compact = false, signedIn = false }: Props) {
   const defaults = { ...CUT_LIST_DEFAULTS, ...start };
-  const { form, values, query } = useUrlForm({ defaults, initial, codec: cutListCodec, syncUrl: !compact });
+  const { form, choice, values, query } = useUrlForm({ defaults, initial, codec: cutListCodec, syncUrl: !compact });
   const { register, setValue, getValues } = form;
   const reactId = useId();
   const idPrefix = compact ? `cut-list-${reactId.replace(/[^a-zA-Z0-9]/g, "")}` : "cut-list";
@@ -66,7 +66,7 @@ export function CutListCalculator({ initial, start, compact = false, signedIn = 
   const display = { unit: request ? request.unit : values.unit === "mm" ? "mm" : "in", denominator: request ? request.denominator : 16 } as const;
   const field = { unit: display.unit, denominator: display.denominator };
 
-  const unitField = register("unit", {
+  const unitField = (unit: "in" | "mm") => choice("unit", unit, {
     onChange: (event) => {
       const to = event.target.value as Unit;
       const from: Unit = to === "mm" ? "in" : "mm";

@@ -42,7 +42,7 @@ type Props = { initial?: SearchParamsRecord; start?: Partial<EvenSpacingValues>;
 
 export function EvenSpacingCalculator({ initial, start, compact = false, signedIn = false }: Props) {
   const defaults = { ...EVEN_SPACING_DEFAULTS, ...start };
-  const { form, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<EvenSpacingValues>(), syncUrl: !compact });
+  const { form, choice, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<EvenSpacingValues>(), syncUrl: !compact });
   const { register, setValue, getValues } = form;
 
   const parsed = useMemo(
@@ -58,7 +58,7 @@ export function EvenSpacingCalculator({ initial, start, compact = false, signedI
   const result = parsed.success ? evenSpacing(parsed.data) : null;
   const display = { unit: parsed.success ? parsed.data.unit : "in", denominator: parsed.success ? parsed.data.denominator : 16 } as const;
 
-  const unitField = register("unit", {
+  const unitField = (unit: "in" | "mm") => choice("unit", unit, {
     onChange: (event) => {
       const to = event.target.value as "in" | "mm";
       const from = to === "mm" ? "in" : "mm";
@@ -74,19 +74,19 @@ export function EvenSpacingCalculator({ initial, start, compact = false, signedI
       <fieldset className="space-y-2">
         <legend className="text-sm font-semibold">Ends of the span</legend>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="members" {...register("endCondition")} /> A member flush at each end (battens on a wall)
+          <input type="radio" {...choice("endCondition", "members")} /> A member flush at each end (battens on a wall)
         </label>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="gaps" {...register("endCondition")} /> A gap at each end (between two posts)
+          <input type="radio" {...choice("endCondition", "gaps")} /> A gap at each end (between two posts)
         </label>
       </fieldset>
       <fieldset className="space-y-2">
         <legend className="text-sm font-semibold">Decide the layout by</legend>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="count" {...register("by")} /> How many members
+          <input type="radio" {...choice("by", "count")} /> How many members
         </label>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="maxGap" {...register("by")} /> The widest gap allowed
+          <input type="radio" {...choice("by", "maxGap")} /> The widest gap allowed
         </label>
       </fieldset>
       {values.by === "count" ? (

@@ -23,11 +23,11 @@ type Props = { initial?: SearchParamsRecord; start?: Partial<FractionBenchValues
 
 export function FractionBench({ initial, start, compact = false, signedIn = false }: Props) {
   const defaults = { ...FRACTION_BENCH_DEFAULTS, ...start };
-  const { form, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<FractionBenchValues>(), syncUrl: !compact });
+  const { form, choice, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<FractionBenchValues>(), syncUrl: !compact });
   const { register, setValue, getValues } = form;
   const display = benchDisplay(values);
 
-  const unitField = register("unit", {
+  const unitField = (unit: "in" | "mm") => choice("unit", unit, {
     onChange: (event) => {
       const to = event.target.value as "in" | "mm";
       const from = to === "mm" ? "in" : "mm";
@@ -43,10 +43,10 @@ export function FractionBench({ initial, start, compact = false, signedIn = fals
         <fieldset className="space-y-1">
           <legend className="text-sm font-semibold">Write lengths as</legend>
           <label className="flex min-h-touch items-center gap-2">
-            <input type="radio" value="inches" {...register("style")} /> inches, <span className="measure">22 3/4&quot;</span>
+            <input type="radio" {...choice("style", "inches")} /> inches, <span className="measure">22 3/4&quot;</span>
           </label>
           <label className="flex min-h-touch items-center gap-2">
-            <input type="radio" value="feet-inches" {...register("style")} /> feet and inches, <span className="measure">1&apos; 10 3/4&quot;</span>
+            <input type="radio" {...choice("style", "feet-inches")} /> feet and inches, <span className="measure">1&apos; 10 3/4&quot;</span>
           </label>
         </fieldset>
       ) : null}

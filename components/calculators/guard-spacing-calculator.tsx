@@ -50,7 +50,7 @@ type Props = { initial?: SearchParamsRecord; start?: Partial<GuardSpacingValues>
 
 export function GuardSpacingCalculator({ initial, start, compact = false, signedIn = false }: Props) {
   const defaults = { ...GUARD_SPACING_DEFAULTS, ...start };
-  const { form, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<GuardSpacingValues>(), syncUrl: !compact });
+  const { form, choice, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<GuardSpacingValues>(), syncUrl: !compact });
   const { register, setValue, getValues } = form;
 
   const limitChoice = values.limit === "stair" || values.limit === "other" ? values.limit : "level";
@@ -73,7 +73,7 @@ export function GuardSpacingCalculator({ initial, start, compact = false, signed
   const laidOut = result !== null && result.members.length === result.count;
   const display: Display = { unit: parsed.success ? parsed.data.unit : "in", denominator: parsed.success ? parsed.data.denominator : 16 };
 
-  const unitField = register("unit", {
+  const unitField = (unit: "in" | "mm") => choice("unit", unit, {
     onChange: (event) => {
       const to = event.target.value as "in" | "mm";
       const from = to === "mm" ? "in" : "mm";
@@ -89,13 +89,13 @@ export function GuardSpacingCalculator({ initial, start, compact = false, signed
       <fieldset className="space-y-2">
         <legend className="text-sm font-semibold">Every opening must be under</legend>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="level" {...register("limit")} /> {limitText(GUARD_MAX_OPENING, display)} — deck, porch, landing
+          <input type="radio" {...choice("limit", "level")} /> {limitText(GUARD_MAX_OPENING, display)} — deck, porch, landing
         </label>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="stair" {...register("limit")} /> {limitText(STAIR_SIDE_OPENING, display)} — open side of a stair
+          <input type="radio" {...choice("limit", "stair")} /> {limitText(STAIR_SIDE_OPENING, display)} — open side of a stair
         </label>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="other" {...register("limit")} /> A limit I type (your local code)
+          <input type="radio" {...choice("limit", "other")} /> A limit I type (your local code)
         </label>
       </fieldset>
       {limitChoice === "other" ? (

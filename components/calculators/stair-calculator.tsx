@@ -53,7 +53,7 @@ type Props = { initial?: SearchParamsRecord; start?: Partial<StairLayoutValues>;
 
 export function StairCalculator({ initial, start, compact = false, signedIn = false }: Props) {
   const defaults = { ...STAIR_LAYOUT_DEFAULTS, ...start };
-  const { form, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<StairLayoutValues>(), syncUrl: !compact });
+  const { form, choice, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<StairLayoutValues>(), syncUrl: !compact });
   const { register, setValue, getValues } = form;
 
   const treadsBy = values.treadsBy === "totalRun" || values.treadsBy === "treadDepth" ? values.treadsBy : "minimum";
@@ -73,7 +73,7 @@ export function StairCalculator({ initial, start, compact = false, signedIn = fa
   const display: Display = { unit: parsed.success ? parsed.data.unit : "in", denominator: parsed.success ? parsed.data.denominator : 16 };
   const maxRiser = parsed.success ? parsed.data.maxRiser : CODE_MAX_RISER;
 
-  const unitField = register("unit", {
+  const unitField = (unit: "in" | "mm") => choice("unit", unit, {
     onChange: (event) => {
       const to = event.target.value as "in" | "mm";
       const from = to === "mm" ? "in" : "mm";
@@ -89,13 +89,13 @@ export function StairCalculator({ initial, start, compact = false, signedIn = fa
       <fieldset className="space-y-2">
         <legend className="text-sm font-semibold">Tread depth from</legend>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="minimum" {...register("treadsBy")} /> The shallowest tread allowed
+          <input type="radio" {...choice("treadsBy", "minimum")} /> The shallowest tread allowed
         </label>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="totalRun" {...register("treadsBy")} /> The total run I have
+          <input type="radio" {...choice("treadsBy", "totalRun")} /> The total run I have
         </label>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="radio" value="treadDepth" {...register("treadsBy")} /> A tread depth I choose
+          <input type="radio" {...choice("treadsBy", "treadDepth")} /> A tread depth I choose
         </label>
       </fieldset>
       {treadsBy === "totalRun" ? (

@@ -3,7 +3,8 @@
 import type { UseFormRegisterReturn } from "react-hook-form";
 
 /** The two settings every calculator shares: inches or millimetres, and the precision to round to. */
-export function UnitPrecisionFields({ unit, denominator, unitValue }: { unit: UseFormRegisterReturn; denominator: UseFormRegisterReturn; unitValue: string }) {
+/** `unit` gives each of the two radio buttons its registration. */
+export function UnitPrecisionFields({ unit, denominator, unitValue }: { unit: (value: "in" | "mm") => UseFormRegisterReturn; denominator: UseFormRegisterReturn; unitValue: string }) {
   return (
     <div className="flex flex-wrap gap-4">
       <fieldset>
@@ -11,7 +12,7 @@ export function UnitPrecisionFields({ unit, denominator, unitValue }: { unit: Us
         <div className="flex overflow-hidden rounded border border-rule-strong">
           {(["in", "mm"] as const).map((u) => (
             <label key={u} className="flex min-h-touch cursor-pointer items-center px-3 has-[:checked]:bg-ink has-[:checked]:text-paper has-[:focus-visible]:outline has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-chalk">
-              <input type="radio" value={u} className="sr-only" {...unit} />
+              <input type="radio" className="sr-only" {...unit(u)} />
               {u === "in" ? "inches" : "mm"}
             </label>
           ))}

@@ -1,7 +1,7 @@
 "use client";
 
-import { useEffect, useMemo, useRef } from "react";
-import { useForm, useWatch, type DefaultValues, type FieldValues } from "react-hook-form";
+import { useCallback, useEffect, useMemo, useRef } from "react";
+import { useForm, useWatch, type DefaultValues, type FieldValues, type Path, type PathValue, type RegisterOptions, type UseFormReturn } from "react-hook-form";
 
 export type SearchParamsRecord = Record<string, string | string[] | undefined>;
 
@@ -35,6 +35,13 @@ export function toSearchParams(record: SearchParamsRecord | undefined): URLSearc
   return params;
 }
 
+/** The starting value of a field named by its path ("kerf", "pieces.2.length"), when it is text. */
+function startValueAt(values: FieldValues, path: string): string | undefined {
+  let at: unknown = values;
+  for (const key of path.split(".")) at = at !== null && typeof at === "object" ? (at as Record<string, unknown>)[key] : undefined;
+  return typeof at === "string" ? at : undefined;
+}
+
 /**
  * A calculator's form whose whole state lives in the address bar, so a layout can be
  * bookmarked and shared. The server page passes its searchParams in as `initial`, so the
@@ -53,9 +60,64 @@ export function useUrlForm<V extends FieldValues>({
   syncUrl: boolean;
 }) {
   const startValues = useMemo(() => (syncUrl ? codec.fromParams(toSearchParams(initial), defaults) : defaults), []); // eslint-disable-line react-hooks/exhaustive-deps
-  const form = useForm<V>({ defaultValues: startValues as DefaultValues<V>, mode: "onChange" });
-  const values = useWatch({ control: form.control }) as V;
-  const query = codec.toParams({ ...startValues, ...values }).toString();
+  const rhf = useForm<V>({ defaultValues: startValues as DefaultValues<V>, mode: "onChange" });
+  const { register: registerField, setValue, getValues } = rhf;
+
+  // Ref callbacks of the page's first commit run before its effects: until then a field being
+  // registered is one the server drew, which a visitor may already have typed into.
+  const hydrating = useRef(true);
+  const typedBeforeHydration = useRef<[Path<V>, string][]>([]);
+
+  // Every field carries its starting value into the server's HTML, so the page reads right (and
+  // can be typed into) before it hydrates, and no field needs disabling until then.
+  // react-hook-form writes its default into each field as it registers it; whatever the visitor
+  // typed or picked in the meantime is put back into the box at once, and into the form's values
+  // once the form is listening (below).
+  const register = useCallback(
+    <N extends Path<V>>(name: N, options?: RegisterOptions<V, N>) => {
+      const registration = registerField(name, options);
+      const keepWhatWasTyped = (element: HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement | null) => {
+        if (!element || !hydrating.current) return registration.ref(element);
+        if (element instanceof HTMLInputElement && element.type === "radio") {
+          // Registering one button of a group checks the default and so unchecks the one picked.
+          const group = (element.form ?? element.ownerDocument).querySelectorAll<HTMLInputElement>(`input[type="radio"][name="${CSS.escape(element.name)}"]`);
+          const picked = [...group].find((button) => button.checked)?.value;
+          registration.ref(element);
+          if (picked !== undefined && picked !== getValues(name)) typedBeforeHydration.current.push([name, picked]);
+          return;
+        }
+        const typed = element.value;
+        registration.ref(element);
+        if (typed === element.value) return;
+        element.value = typed;
+        typedBeforeHydration.current.push([name, typed]);
+      };
+      return { ...registration, ref: keepWhatWasTyped, defaultValue: startValueAt(startValues, name) };
+    },
+    [registerField, getValues, startValues],
+  );
+  /** A radio button of a field: checked in the server's HTML when it is the starting value. */
+  const choice = useCallback(
+    <N extends Path<V>>(name: N, value: string, options?: RegisterOptions<V, N>) => {
+      const { defaultValue, ...registration } = register(name, options);
+      return { ...registration, value, defaultChecked: defaultValue === value };
+    },
+    [register],
+  );
+  const form: UseFormReturn<V> = { ...rhf, register };
+  const watched = useWatch({ control: form.control }) as V;
+  // After useWatch has subscribed, so the values, the results and the address follow.
+  useEffect(() => {
+    hydrating.current = false;
+    for (const [name, value] of typedBeforeHydration.current) setValue(name, value as PathValue<V, Path<V>>, { shouldDirty: true });
+    typedBeforeHydration.current = [];
+  }, [setValue]);
+  const current = { ...startValues, ...watched } as V;
+  const query = codec.toParams(current).toString();
+  // One object for as long as the query is the same, so what a calculator derives from its values
+  // (the parse, the layout, the results) is not made again by a render that changed nothing:
+  // react-hook-form renders once more as it mounts.
+  const values = useMemo(() => current, [query]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const first = useRef(true);
   useEffect(() => {
@@ -69,5 +131,5 @@ export function useUrlForm<V extends FieldValues>({
     window.history.replaceState(window.history.state, "", url);
   }, [query, syncUrl]);
 
-  return { form, values: { ...startValues, ...values } as V, query };
+  return { form, choice, values, query };
 }

@@ -79,7 +79,7 @@ type Props = { initial?: SearchParamsRecord; start?: Partial<WallGridValues>; co
 
 export function WallGridCalculator({ initial, start, compact = false, signedIn = false }: Props) {
   const defaults = { ...WALL_GRID_DEFAULTS, ...start };
-  const { form, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<WallGridValues>(), syncUrl: !compact });
+  const { form, choice, values, query } = useUrlForm({ defaults, initial, codec: flatCodec<WallGridValues>(), syncUrl: !compact });
   const { register, setValue, getValues } = form;
   const reactId = useId();
   const idPrefix = compact ? `wall-grid-${reactId.replace(/[^a-zA-Z0-9]/g, "")}` : "wall-grid";
@@ -107,7 +107,7 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
   const field = { unit: display.unit, denominator: display.denominator };
   const pick = (key: keyof WallGridValues) => (text: string) => setValue(key, text, { shouldDirty: true });
 
-  const unitField = register("unit", {
+  const unitField = (unit: "in" | "mm") => choice("unit", unit, {
     onChange: (event) => {
       const to = event.target.value as Unit;
       const from: Unit = to === "mm" ? "in" : "mm";
@@ -137,10 +137,10 @@ export function WallGridCalculator({ initial, start, compact = false, signedIn =
         <MemberWidthField label="Vertical width" registration={register("verticalWidth")} value={values.verticalWidth} {...field} error={errors.verticalWidth} hint="e.g. 3 1/2 for a 1x4" onPick={pick("verticalWidth")} />
         <div role="radiogroup" aria-label="Decide the verticals by" className="space-y-1">
           <label className="flex min-h-touch items-center gap-2">
-            <input type="radio" value="count" {...register("by")} /> How many verticals (one flush at each end)
+            <input type="radio" {...choice("by", "count")} /> How many verticals (one flush at each end)
           </label>
           <label className="flex min-h-touch items-center gap-2">
-            <input type="radio" value="maxBay" {...register("by")} /> The widest bay allowed
+            <input type="radio" {...choice("by", "maxBay")} /> The widest bay allowed
           </label>
         </div>
         {values.by === "count" ? (
