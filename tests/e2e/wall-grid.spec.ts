@@ -141,9 +141,12 @@ test("switching to millimetres converts the typed lengths and the results", asyn
 
 test("the print view is a shop sheet: inputs hidden, drawing and tables kept", async ({ page }) => {
   await open(page, "/calculators/wall-grid");
+  const inputsLine = page.getByText(/^wall .+ × .+ · verticals 7 × .+ · rails top .+ · rows 1 · studs .+ o\.c\. from .+$/);
+  await expect(inputsLine).toBeHidden();
   await page.emulateMedia({ media: "print" });
   await expect(page.getByRole("form", { name: "Wall grid inputs" })).toBeHidden();
   await expect(page.getByText("Sixteenths shop sheet · Wall grid")).toBeVisible();
+  await expect(inputsLine).toBeVisible();
   await expect(page.getByRole("img", { name: "Wall elevation" })).toBeVisible();
   await expect(marks(page)).toBeVisible();
   await expect(pieces(page)).toBeVisible();
