@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useRef } from "react";
+import { useEffect, useId, useRef } from "react";
 import { readAnswer } from "@/lib/grading/grade";
 import type { PartView } from "@/lib/practice/present";
 import type { PartResult } from "@/lib/practice/view";
@@ -32,6 +32,12 @@ export function AnswerField({ part, value, onChange, result, error, locked }: Pr
   const input = useRef<HTMLInputElement>(null);
   const preview = value.trim() === "" ? null : readAnswer({ key: part.key, label: part.label, answer: part.answer, precision: 64 }, value);
   const describedBy = [`${id}-hint`, `${id}-reads`, result ? `${id}-result` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ");
+
+  // Text typed into the server's HTML before the page hydrated is the answer so far.
+  useEffect(() => {
+    const typed = input.current?.value;
+    if (typed !== undefined && typed !== value) onChange(typed);
+  }, []); // eslint-disable-line react-hooks/exhaustive-deps
 
   const insert = (text: string) => {
     const el = input.current;

@@ -142,7 +142,9 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
       </div>
 
       <form ref={answersForm} onSubmit={submit} noValidate className="space-y-4" aria-label="Your answers">
-        <fieldset disabled={!hydrated || busy} className="min-w-0 space-y-4">
+        {/* The boxes take typing before the page hydrates (each adopts what was typed); only the
+            button waits, so Enter cannot send the answers as a plain form in the address bar. */}
+        <fieldset disabled={busy} className="min-w-0 space-y-4">
           <legend className="sr-only">Your answers</legend>
           {problem.parts.map((part) => (
             <AnswerField
@@ -159,7 +161,7 @@ export function ProblemWorkspace({ initial, onAnother, assignment, signedIn, hea
           {lateNote ? <Alert tone="info">This try came in after the due date and counts as late.</Alert> : null}
           {final ? null : (
             <div className="flex flex-wrap items-center gap-3">
-              <button type="submit" className="btn-primary">
+              <button type="submit" className="btn-primary" disabled={!hydrated}>
                 {busy ? "Saving…" : "Check answers"}
               </button>
               <p className="text-sm text-ink-soft" aria-live="polite" data-sending={sending?.phase}>

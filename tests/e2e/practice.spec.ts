@@ -98,3 +98,35 @@ test("on a 360 px phone the problem fits the width", async ({ page }) => {
   const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
   expect(overflow).toBeLessThanOrEqual(0);
 });
+
+test("answers typed before the page hydrates are kept and checked; the button waits for the page", async ({ page }) => {
+  const learner = DEMO_STAFF.find((s) => s.note.startsWith("self-learner"))!;
+  await signIn(page, learner.email);
+  await expectSignedInAs(page, learner.name);
+  await page.goto("/practice");
+  await page.locator(`[data-skill="${KIND.skill}"]`).getByRole("group", { name: `Start ${KIND.title}` }).getByRole("button", { name: /^Level 1/ }).click();
+  await expect(page).toHaveURL(/\/practice\/[0-9a-f-]{36}$/);
+  const id = page.url().split("/").pop()!;
+  const seed = 7;
+  await pinSeed(id, seed);
+  const parts = KIND.parts(KIND.generate(seed, LEVEL));
+  const first = parts[0];
+
+  // The page's scripts are held back: the visitor works on the server's HTML.
+  let release!: () => void;
+  const gate = new Promise<void>((resolve) => (release = resolve));
+  await page.route(/\/_next\/static\/chunks\/.*\.js$/, async (route) => {
+    await gate;
+    await route.continue();
+  });
+  await page.reload({ waitUntil: "domcontentloaded" });
+  for (const part of parts) await page.getByRole("textbox", { name: part.label }).fill(part.answer === "count" ? "6" : "12 3/4");
+  await expect(page.getByRole("button", { name: "Check answers" })).toBeDisabled();
+  release();
+
+  await expect(page.locator(`[data-part="${first.key}"]`)).toContainText("reads as");
+  await page.getByRole("button", { name: "Check answers" }).click();
+  for (const part of parts) await expect(page.locator(`[data-part="${part.key}"] [data-verdict]`)).toBeVisible();
+  await expect(page.getByRole("textbox", { name: first.label })).toHaveValue(first.answer === "count" ? "6" : "12 3/4");
+  await expectSignedInAs(page, learner.name);
+});
