@@ -1,21 +1,11 @@
 import { expect, test, type Page } from "@playwright/test";
+import { holdScripts } from "./helpers";
 
 // What a calculator is before its scripts run: the server's HTML, which a phone on a slow
 // connection shows (and lets the visitor type into) for a second or more.
 
 const box = (page: Page, name: string) => page.getByRole("textbox", { name, exact: true });
 const elevation = (page: Page) => page.getByRole("img", { name: "Wall elevation" });
-
-/** Holds every script of the page back until the returned function lets them through. */
-async function holdScripts(page: Page): Promise<() => void> {
-  let release!: () => void;
-  const gate = new Promise<void>((resolve) => (release = resolve));
-  await page.route(/\/_next\/static\/chunks\/.*\.js$/, async (route) => {
-    await gate;
-    await route.continue();
-  });
-  return release;
-}
 
 test.describe("without scripts", () => {
   test.use({ javaScriptEnabled: false });

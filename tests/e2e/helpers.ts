@@ -16,3 +16,17 @@ export async function expectSignedInAs(page: Page, name: string) {
 export async function fillAnswers(problem: Locator, parts: { key: string; label: string }[], answers: Record<string, string>) {
   for (const part of parts) await problem.getByRole("textbox", { name: part.label }).fill(answers[part.key]);
 }
+
+/**
+ * Holds every script of the page back until the returned function lets them through, so a test
+ * can work on the server's HTML as a visitor on a slow phone does before the page hydrates.
+ */
+export async function holdScripts(page: Page): Promise<() => void> {
+  let release!: () => void;
+  const gate = new Promise<void>((resolve) => (release = resolve));
+  await page.route(/\/_next\/static\/chunks\/.*\.js$/, async (route) => {
+    await gate;
+    await route.continue();
+  });
+  return release;
+}

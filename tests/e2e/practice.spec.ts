@@ -4,7 +4,7 @@ import { gradeAnswer } from "@/lib/grading/grade";
 import { findKind, type Level } from "@/lib/problems";
 import { roundedAnswer, roundingSlip } from "@/lib/problems/kit";
 import { DEMO_STAFF } from "@/seeders/demo";
-import { signIn, expectSignedInAs } from "./helpers";
+import { expectSignedInAs, holdScripts, signIn } from "./helpers";
 
 const KIND = findKind("even-gap")!;
 const LEVEL: Level = 1;
@@ -112,13 +112,7 @@ test("answers typed before the page hydrates are kept and checked; the button wa
   const parts = KIND.parts(KIND.generate(seed, LEVEL));
   const first = parts[0];
 
-  // The page's scripts are held back: the visitor works on the server's HTML.
-  let release!: () => void;
-  const gate = new Promise<void>((resolve) => (release = resolve));
-  await page.route(/\/_next\/static\/chunks\/.*\.js$/, async (route) => {
-    await gate;
-    await route.continue();
-  });
+  const release = await holdScripts(page);
   await page.reload({ waitUntil: "domcontentloaded" });
   for (const part of parts) await page.getByRole("textbox", { name: part.label }).fill(part.answer === "count" ? "6" : "12 3/4");
   await expect(page.getByRole("button", { name: "Check answers" })).toBeDisabled();
