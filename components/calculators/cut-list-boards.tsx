@@ -32,15 +32,19 @@ export function boardsDescription(result: CutListResult, display: Display, trim:
  * from the left end, the kerfs as dark lines, the trimmed end shaded and the offcut hatched.
  */
 export function CutListBoards({ result, display, trim, idPrefix }: { result: CutListResult; display: Display; trim: Fraction; idPrefix: string }) {
+  const description = boardsDescription(result, display, trim);
   return (
     <NarrowOrWide
-      wide={<BoardsCanvas result={result} display={display} trim={trim} idPrefix={idPrefix} narrow={false} />}
-      narrow={<BoardsCanvas result={result} display={display} trim={trim} idPrefix={`${idPrefix}-narrow`} narrow />}
+      wide={<BoardsCanvas result={result} display={display} trim={trim} description={description} idPrefix={idPrefix} narrow={false} />}
+      narrow={<BoardsCanvas result={result} display={display} trim={trim} description={description} idPrefix={`${idPrefix}-narrow`} narrow />}
     />
   );
 }
 
-function BoardsCanvas({ result, display, trim, idPrefix, narrow }: { result: CutListResult; display: Display; trim: Fraction; idPrefix: string; narrow: boolean }) {
+type CanvasProps = { result: CutListResult; display: Display; trim: Fraction; description: string; idPrefix: string; narrow: boolean };
+
+/** One canvas; the description is worked out once for both. */
+function BoardsCanvas({ result, display, trim, description, idPrefix, narrow }: CanvasProps) {
   const WIDTH = narrow ? NARROW : WIDE;
   // On a phone the labels grow a little more than the canvas shrinks them.
   const titleSize = narrow ? 11.5 : 10;
@@ -56,7 +60,7 @@ function BoardsCanvas({ result, display, trim, idPrefix, narrow }: { result: Cut
     <figure className="card overflow-hidden p-2 print:break-inside-avoid">
       <svg viewBox={`0 0 ${WIDTH} ${height}`} role="img" aria-labelledby={`${idPrefix}-title ${idPrefix}-desc`} className="w-full">
         <title id={`${idPrefix}-title`}>Boards and their cuts</title>
-        <desc id={`${idPrefix}-desc`}>{boardsDescription(result, display, trim)}</desc>
+        <desc id={`${idPrefix}-desc`}>{description}</desc>
         <defs>
           <pattern id={`${idPrefix}-offcut`} width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
             <rect width="6" height="6" className="fill-paper-sunk" />

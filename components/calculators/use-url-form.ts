@@ -1,7 +1,7 @@
 "use client";
 
 import { useCallback, useEffect, useMemo, useRef } from "react";
-import { useForm, useWatch, type DefaultValues, type FieldValues, type Path, type PathValue, type RegisterOptions, type UseFormReturn } from "react-hook-form";
+import { get, useForm, useWatch, type DefaultValues, type FieldValues, type Path, type PathValue, type RegisterOptions, type UseFormReturn } from "react-hook-form";
 
 export type SearchParamsRecord = Record<string, string | string[] | undefined>;
 
@@ -33,13 +33,6 @@ export function toSearchParams(record: SearchParamsRecord | undefined): URLSearc
     else if (Array.isArray(value) && value[0] !== undefined) params.set(key, value[0]);
   }
   return params;
-}
-
-/** The starting value of a field named by its path ("kerf", "pieces.2.length"), when it is text. */
-function startValueAt(values: FieldValues, path: string): string | undefined {
-  let at: unknown = values;
-  for (const key of path.split(".")) at = at !== null && typeof at === "object" ? (at as Record<string, unknown>)[key] : undefined;
-  return typeof at === "string" ? at : undefined;
 }
 
 /**
@@ -92,7 +85,9 @@ export function useUrlForm<V extends FieldValues>({
         element.value = typed;
         typedBeforeHydration.current.push([name, typed]);
       };
-      return { ...registration, ref: keepWhatWasTyped, defaultValue: startValueAt(startValues, name) };
+      // A path ("pieces.2.length") reaches into the field arrays; rows added later have no start value.
+      const start: unknown = get(startValues, name);
+      return { ...registration, ref: keepWhatWasTyped, defaultValue: typeof start === "string" ? start : undefined };
     },
     [registerField, getValues, startValues],
   );

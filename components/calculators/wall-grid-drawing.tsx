@@ -48,16 +48,19 @@ export function wallGridDescription(result: WallGridResult, display: Display): s
  * the studs dashed behind, and dimension strings for the wall, one bay and the vertical.
  */
 export function WallGridDrawing({ result, display, idPrefix = "wall-grid" }: { result: WallGridResult; display: Display; idPrefix?: string }) {
+  const description = wallGridDescription(result, display);
   return (
     <NarrowOrWide
       onPaper
-      wide={<WallGridCanvas result={result} display={display} idPrefix={idPrefix} width={WIDE} />}
-      narrow={<WallGridCanvas result={result} display={display} idPrefix={`${idPrefix}-narrow`} width={NARROW} />}
+      wide={<WallGridCanvas result={result} display={display} description={description} idPrefix={idPrefix} width={WIDE} />}
+      narrow={<WallGridCanvas result={result} display={display} description={description} idPrefix={`${idPrefix}-narrow`} width={NARROW} />}
     />
   );
 }
 
-function WallGridCanvas({ result, display, idPrefix, width: WIDTH }: { result: WallGridResult; display: Display; idPrefix: string; width: number }) {
+type CanvasProps = { result: WallGridResult; display: Display; description: string; idPrefix: string; width: number };
+
+function WallGridCanvas({ result, display, description, idPrefix, width: WIDTH }: CanvasProps) {
   const wallWidth = result.wallWidth.valueOf();
   const wallHeight = result.wallHeight.valueOf();
   const scale = Math.min((WIDTH - LEFT - RIGHT) / wallWidth, (MAX_WALL_HEIGHT * WIDTH) / wallHeight);
@@ -82,7 +85,7 @@ function WallGridCanvas({ result, display, idPrefix, width: WIDTH }: { result: W
     <figure className="card overflow-hidden p-2 print:break-inside-avoid">
       <svg viewBox={`0 0 ${WIDTH} ${height}`} role="img" aria-labelledby={`${idPrefix}-title ${idPrefix}-desc`} className="mx-auto w-full max-h-[36rem] print:max-h-[2.9in]">
         <title id={`${idPrefix}-title`}>Wall elevation</title>
-        <desc id={`${idPrefix}-desc`}>{wallGridDescription(result, display)}</desc>
+        <desc id={`${idPrefix}-desc`}>{description}</desc>
         <defs>
           <pattern id={`${idPrefix}-miss`} width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
             <rect width="6" height="6" className="fill-danger-bg" />
